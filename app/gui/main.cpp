@@ -1,0 +1,6 @@
+#include "airwright/ui/GuiApplication.h"
+
+int main(int argc, char** argv)
+{
+    return Airwright::Ui::runGuiApplication(argc, argv);
+}

@@ -1,0 +1,3 @@
+set(AIRWRIGHT_BENCH_SOURCES
+    PsychroBench.cpp
+)

@@ -1,0 +1,44 @@
+#pragma once
+// A moist-air state: dry bulb, humidity ratio and the total (barometric) pressure
+// it exists at. Immutable and always valid: the factories reject any input that
+// is not a physical, unsaturated-or-saturated state.
+
+#include "airwright/core/Quantities.h"
+
+namespace Airwright::Core::Psychro {
+
+class MoistAirState {
+public:
+    static MoistAirState fromDryBulbRelativeHumidity(AbsoluteTemperature tdb, Ratio rh, Pressure p);
+    static MoistAirState fromDryBulbWetBulb(AbsoluteTemperature tdb, AbsoluteTemperature twb, Pressure p);
+    static MoistAirState fromDryBulbDewPoint(AbsoluteTemperature tdb, AbsoluteTemperature tdp, Pressure p);
+    static MoistAirState fromDryBulbHumidityRatio(AbsoluteTemperature tdb, HumidityRatio w, Pressure p);
+    static MoistAirState fromEnthalpyHumidityRatio(SpecificEnthalpy h, HumidityRatio w, Pressure p);
+    static MoistAirState fromDryBulbEnthalpy(AbsoluteTemperature tdb, SpecificEnthalpy h, Pressure p);
+
+    AbsoluteTemperature dryBulb() const { return m_tdb; }
+    HumidityRatio humidityRatio() const { return m_w; }
+    Pressure pressure() const { return m_p; }
+
+    Ratio relativeHumidity() const;
+    AbsoluteTemperature dewPoint() const;
+    AbsoluteTemperature wetBulb() const;
+    SpecificEnthalpy enthalpy() const;
+    SpecificVolume specificVolume() const; // per kg dry air
+    Density density() const;               // moist air
+    Ratio degreeOfSaturation() const;
+    Pressure vapourPressure() const;
+    Pressure saturationPressure() const;
+    HumidityRatio saturationHumidityRatio() const;
+
+    bool operator==(const MoistAirState&) const = default;
+
+private:
+    MoistAirState(AbsoluteTemperature tdb, HumidityRatio w, Pressure p) : m_tdb(tdb), m_w(w), m_p(p) {}
+
+    AbsoluteTemperature m_tdb;
+    HumidityRatio m_w;
+    Pressure m_p;
+};
+
+} // namespace Airwright::Core::Psychro

@@ -1,0 +1,3 @@
+set(AIRWRIGHT_CLI_TEST_SOURCES
+    cli/CliApplicationTest.cpp
+)
