@@ -9,6 +9,10 @@ namespace Airwright::Core::Psychro {
 
 class MoistAirState {
 public:
+    // Dry air at 20 C and 101325 Pa: a valid state for result containers that are
+    // filled in later; never a stand-in for an unknown input.
+    MoistAirState() : m_tdb(celsius(20.0)), m_w(kilogramsPerKilogram(0.0)), m_p(pascals(101325.0)) {}
+
     static MoistAirState fromDryBulbRelativeHumidity(AbsoluteTemperature tdb, Ratio rh, Pressure p);
     static MoistAirState fromDryBulbWetBulb(AbsoluteTemperature tdb, AbsoluteTemperature twb, Pressure p);
     static MoistAirState fromDryBulbDewPoint(AbsoluteTemperature tdb, AbsoluteTemperature tdp, Pressure p);

@@ -30,10 +30,18 @@ HumidityRatio humidityRatioFromRelativeHumidity(AbsoluteTemperature t, Ratio rh,
 Ratio relativeHumidityFromHumidityRatio(AbsoluteTemperature t, HumidityRatio w, Pressure pressure);
 
 // Dew point (frost point below the triple point): inverse of saturationPressure.
+// The vapour pressure must lie within pws(-100 C) .. pws(200 C): perfectly dry air
+// (W = 0) has no dew point in range and gets an InputError.
 AbsoluteTemperature dewPointFromVapourPressure(Pressure vapourPressure);
 AbsoluteTemperature dewPointFromHumidityRatio(HumidityRatio w, Pressure pressure);
 
 // Wet bulb (eq. 33 for t* at or above the triple point, eq. 35 below it).
+// The two equations do not meet at the triple point: eq. 35 gives the higher W
+// there, so for dry air a few kelvin above freezing both have a root, 0.1 .. 0.9 K
+// apart (e.g. 7.5 C, 14 % RH, 101325 Pa). Rule: eq. 33 whenever it has a root at or
+// above the triple point (its W at 0.01 C is not above the given W), else eq. 35.
+// PsychroLib's bisection may return either root in that band; see
+// docs/psychrometrics.md. Within 1e-6 K of the root (Halley steps, bounded).
 AbsoluteTemperature wetBulbFromHumidityRatio(AbsoluteTemperature t, HumidityRatio w, Pressure pressure);
 AbsoluteTemperature wetBulbFromRelativeHumidity(AbsoluteTemperature t, Ratio rh, Pressure pressure);
 HumidityRatio humidityRatioFromWetBulb(AbsoluteTemperature t, AbsoluteTemperature wetBulb, Pressure pressure);
