@@ -1,0 +1,4 @@
+list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
+    core/sections/CoolantTest.cpp
+    core/sections/SectionsTest.cpp
+)
