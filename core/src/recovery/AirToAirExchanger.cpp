@@ -1,0 +1,450 @@
+#include "airwright/core/recovery/AirToAirExchanger.h"
+
+#include "EffectivenessKernels.h"
+#include "FrostKernels.h"
+
+#include "airwright/core/InputError.h"
+#include "airwright/core/NumberFormat.h"
+#include "airwright/core/psychro/AirProcesses.h"
+#include "airwright/core/psychro/PsychroRaw.h"
+#include "airwright/core/psychro/Psychrometrics.h"
+#include "airwright/core/recovery/BracketedRoot.h"
+#include "airwright/core/recovery/EffectivenessNtu.h"
+#include "airwright/core/recovery/FrostOnset.h"
+
+#include <algorithm>
+#include <cmath>
+#include <string>
+#include <utility>
+
+namespace Airwright::Core::Recovery {
+
+namespace raw = Psychro::detail;
+
+namespace {
+
+constexpr double kMaxFlowOverRated = 5.0;
+constexpr double kTypicalUpperEfficiency = 0.90;
+// Temperature tolerance of the wet-surface solve, K: far below any measurement,
+// and the energy balance closes exactly whatever it is (see coolWarmStream).
+constexpr double kWetSolveTolerance = 1e-4;
+
+// Dry-air basis cp of moist air, the slope of ASHRAE eq. 30 at constant W.
+double moistCp(double w) { return raw::enthalpy(1.0, w) - raw::enthalpy(0.0, w); }
+
+// Enthalpy of the water a stream leaves behind, 4186 t J/kg as in the psychro
+// layer's clampToSaturation, so every kind balances on the same convention (the
+// heat of fusion of frost is not counted: frost is a fault the protection avoids).
+double condensateEnthalpy(double tC) { return raw::liquidWaterEnthalpy(tC); }
+
+void checkRange(const char* quantity, double v, double lo, double hi, const char* unit, const char* range)
+{
+    if (!(v >= lo && v <= hi))
+        throw InputError(quantity, v, unit, range);
+}
+
+struct Side {
+    double t, w, p, m, cp;
+    double capacity() const { return m * cp; }
+};
+
+Side sideOf(const Psychro::MoistAirState& s, double m)
+{
+    const double w = toKilogramsPerKilogram(s.humidityRatio());
+    return {toCelsius(s.dryBulb()), w, toPascals(s.pressure()), m, moistCp(w)};
+}
+
+// Cooling of the warm stream against a heat rate rate(b), where b multiplies
+// the warm side's capacity rate and conductance (1 when dry; AirToAirExchanger.h).
+struct WarmOutcome {
+    double q = 0.0;          // W, total enthalpy given up (gas + condensate)
+    double tOut = 0.0;       // C
+    double wOut = 0.0;
+    double condensate = 0.0; // kg/s
+    double b = 1.0;
+};
+
+template <class Rate>
+WarmOutcome coolWarmStream(const Side& warm, double tColdIn, Rate rate)
+{
+    const double cw = warm.capacity();
+    const double qDry = rate(1.0);
+    const double tDry = warm.t - qDry / cw;
+    if (warm.w <= raw::satHumidityRatio(tDry, warm.p))
+        return {qDry, tDry, warm.w, 0.0, 1.0};
+
+    const double hIn = raw::enthalpy(warm.t, warm.w);
+    auto qAir = [&](double t) {
+        const double ws = raw::satHumidityRatio(t, warm.p);
+        if (ws >= warm.w)
+            return cw * (warm.t - t);
+        return warm.m * (hIn - raw::enthalpy(t, ws) - (warm.w - ws) * condensateEnthalpy(t));
+    };
+    auto meanSlope = [&](double t, double q) {
+        const double drop = warm.t - t;
+        return drop > 1e-9 ? q / (cw * drop) : 1.0; // at the inlet itself the path is empty
+    };
+    auto g = [&](double t) {
+        const double q = qAir(t);
+        return rate(meanSlope(t, q)) - q;
+    };
+    // g > 0 above the root (the surface could take more), g <= 0 at the cold inlet
+    // (no rate exceeds b C_warm dT there). Above the dew point b = 1 and
+    // g = qDry - C_warm (t_in - t) > 0 because t > tDry.
+    const double gDry = g(tDry);
+    double lo, hi, fLo, fHi;
+    if (gDry > 0.0) {
+        lo = tColdIn;
+        fLo = g(lo);
+        hi = tDry;
+        fHi = gDry;
+        if (fLo >= 0.0) // rounding at an extreme NTU: the outlet reaches the cold inlet
+            hi = lo, fHi = fLo = 0.0;
+    } else {
+        lo = tDry;
+        fLo = gDry;
+        // A saturated inlet has its dew point at (or by rounding just above) t_in.
+        hi = std::min(raw::dewPointFromVapourPressure(raw::vapourPressureFromHumidityRatio(warm.w, warm.p)),
+                      warm.t);
+        fHi = qDry - cw * (warm.t - hi); // b = 1 at the dew point: no rate call needed
+    }
+    const double t = hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance).x;
+    const double q = qAir(t);
+    const double ws = std::min(warm.w, raw::satHumidityRatio(t, warm.p));
+    return {q, t, ws, warm.m * (warm.w - ws), meanSlope(t, q)};
+}
+
+Psychro::MoistAirState stateOf(double tC, double w, double p)
+{
+    return Psychro::MoistAirState::fromDryBulbHumidityRatio(celsius(tC), kilogramsPerKilogram(w), pascals(p));
+}
+
+} // namespace
+
+AirToAirExchanger::AirToAirExchanger(ExchangerRating rating) : m_rating(std::move(rating))
+{
+    const ExchangerKind kind = m_rating.kind;
+    const double eps = toFraction(m_rating.ratedTemperatureEfficiency);
+    const double q = toCubicMetresPerSecond(m_rating.ratedVolumeFlow);
+    checkRange("rated temperature efficiency", eps * 100.0, 0.0, 100.0, "%", "0 .. below 100 %");
+    if (!(eps > 0.0 && eps < 1.0))
+        throw InputError("rated temperature efficiency", eps * 100.0, "%", "above 0 and below 100 %");
+    if (!(q > 0.0 && std::isfinite(q)))
+        throw InputError("rated volume flow", q, "m3/s", "above 0");
+    checkRange("rated supply pressure drop", toPascals(m_rating.ratedSupplyPressureDrop), 0.0, 1e5, "Pa",
+               "0 .. 100000 Pa");
+    checkRange("rated extract pressure drop", toPascals(m_rating.ratedExtractPressureDrop), 0.0, 1e5, "Pa",
+               "0 .. 100000 Pa");
+    m_dpExponent = toFraction(m_rating.pressureDropExponent.value_or(defaultPressureDropExponent(kind)));
+    m_htExponent = toFraction(m_rating.heatTransferExponent.value_or(defaultHeatTransferExponent(kind)));
+    checkRange("pressure drop exponent", m_dpExponent, 1.0, 2.0, "", "1 .. 2");
+    checkRange("heat-transfer exponent", m_htExponent, 0.0, 1.0, "", "0 .. 1");
+    const double epsW = toFraction(m_rating.ratedHumidityEfficiency);
+    if (transfersMoisture(kind))
+        checkRange("rated humidity efficiency", epsW * 100.0, 0.0, 100.0, "%", "0 .. 100 %");
+    else if (epsW != 0.0)
+        throw InputError("rated humidity efficiency of a " + std::string(toString(kind)), epsW * 100.0, "%",
+                         "0 % (only hygroscopic and sorption rotors take up vapour)");
+
+    m_ratedMassFlow = q * kReferenceAirDensity;
+    m_ratedCapacityRate = m_ratedMassFlow * moistCp(0.0);
+    const double c = m_ratedCapacityRate;
+
+    if (isPlate(kind)) {
+        m_ratedNtu = toFraction(ntuFromEffectiveness(arrangementOf(kind), fraction(eps), fraction(1.0)));
+        m_ratedSideConductance = 2.0 * m_ratedNtu * c; // 1/UA = 1/hA + 1/hA, sides equal
+    } else if (isRotary(kind)) {
+        const double crr = toFraction(m_rating.ratedRotorCapacityRatio);
+        if (!(crr > 0.0 && crr <= 1000.0))
+            throw InputError("rated rotor capacity ratio", crr, "", "above 0 .. 1000");
+        const double factor = Kernels::rotorFactor(crr);
+        const double epsCf = eps / factor;
+        const double epsCfMax = toFraction(maximumEffectiveness(FlowArrangement::CounterFlow, fraction(1.0)));
+        if (!(epsCf < epsCfMax))
+            throw InputError("rated temperature efficiency of a rotor with capacity ratio " + formatNumber(crr),
+                             eps * 100.0, "%", "below " + formatNumber(100.0 * factor * epsCfMax) + " %");
+        m_ratedNtu = toFraction(ntuFromEffectiveness(FlowArrangement::CounterFlow, fraction(epsCf), fraction(1.0)));
+        m_ratedSideConductance = 2.0 * m_ratedNtu * c;
+    } else {
+        const double cp = toJoulesPerKilogramKelvin(m_rating.loopFluidSpecificHeat);
+        checkRange("loop fluid specific heat", cp, 1000.0, 5000.0, "J/(kg K)", "1000 .. 5000 J/(kg K)");
+        checkRange("pump power", toWatts(m_rating.pumpPower), 0.0, 1e6, "W", "0 .. 1000000 W");
+        if (m_rating.loopFluidFlow) {
+            const double mf = toKilogramsPerSecond(*m_rating.loopFluidFlow);
+            if (!(mf > 0.0 && std::isfinite(mf)))
+                throw InputError("loop fluid flow", mf, "kg/s", "above 0");
+            m_loopCapacityRate = mf * cp;
+        } else {
+            m_loopCapacityRate = c;
+        }
+        // Identical coils, Q = dT / (2/(eps_c Cmin_c) - 1/C_f) = eps C dT.
+        const double cf = m_loopCapacityRate;
+        const double cmin = std::min(c, cf), cmax = std::max(c, cf);
+        const double epsCoil = 2.0 * c / (cmin * (1.0 / eps + c / cf));
+        const double limit = toFraction(maximumEffectiveness(FlowArrangement::CounterFlow, fraction(cmin / cmax)));
+        if (!(epsCoil < limit))
+            throw InputError("rated temperature efficiency of a run-around loop with fluid/air capacity ratio "
+                                 + formatNumber(cf / c),
+                             eps * 100.0, "%", "a value the two coils can reach (each coil below "
+                                                   + formatNumber(100.0 * limit) + " %)");
+        m_ratedNtu = toFraction(
+            ntuFromEffectiveness(FlowArrangement::CounterFlow, fraction(epsCoil), fraction(cmin / cmax)));
+        m_ratedCoilConductance = m_ratedNtu * cmin;
+    }
+}
+
+bool AirToAirExchanger::exceedsTypicalEfficiency() const
+{
+    return toFraction(m_rating.ratedTemperatureEfficiency) > kTypicalUpperEfficiency;
+}
+
+double AirToAirExchanger::conductancePerSide(double dryAirFlow) const
+{
+    return m_ratedSideConductance * std::pow(dryAirFlow / m_ratedMassFlow, m_htExponent);
+}
+
+double AirToAirExchanger::coilConductance(double dryAirFlow) const
+{
+    // The air side dominates a finned coil's resistance; the loop flow is constant.
+    return m_ratedCoilConductance * std::pow(dryAirFlow / m_ratedMassFlow, m_htExponent);
+}
+
+ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& point) const
+{
+    const ExchangerKind kind = m_rating.kind;
+    const double maxFlow = kMaxFlowOverRated * m_ratedMassFlow;
+    const double msTotal = toKilogramsPerSecond(point.supplyDryAirFlow);
+    const double me = toKilogramsPerSecond(point.extractDryAirFlow);
+    auto checkFlow = [maxFlow](const char* quantity, double m) {
+        if (!(m > 0.0 && m <= maxFlow))
+            throw InputError(quantity, m, "kg/s", "above 0 .. " + formatNumber(maxFlow) + " kg/s (5 x rated)");
+    };
+    checkFlow("supply dry-air flow", msTotal);
+    checkFlow("extract dry-air flow", me);
+    const double beta = toFraction(point.bypassFraction);
+    const double speed = toFraction(point.rotorSpeedRatio);
+    checkRange("bypass fraction", beta, 0.0, 1.0, "", "0 .. 1");
+    checkRange("rotor speed ratio", speed, 0.0, 1.0, "", "0 .. 1");
+
+    const Side supIn = sideOf(point.supplyInlet, msTotal * (1.0 - beta));
+    const Side extIn = sideOf(point.extractInlet, me);
+    const double ms = supIn.m;
+
+    // Core outlet of each stream, raw.
+    double tsOut = supIn.t, wsOut = supIn.w, teOut = extIn.t, weOut = extIn.w;
+    double condS = 0.0, condE = 0.0, moisture = 0.0;
+    double surface = std::min(supIn.t, extIn.t);
+    bool frost = false;
+    std::optional<RunAroundLoopState> loop;
+    bool supplyClampNeeded = false, extractClampNeeded = false;
+
+    const bool extractWarm = extIn.t > supIn.t;
+    const Side& warm = extractWarm ? extIn : supIn;
+    const Side& cold = extractWarm ? supIn : extIn;
+    const double dT = warm.t - cold.t;
+    const double cWarm = warm.capacity(), cCold = cold.capacity();
+
+    if (kind == ExchangerKind::RunAroundCoil) {
+        const double cf = m_loopCapacityRate;
+        const double cp = toJoulesPerKilogramKelvin(m_rating.loopFluidSpecificHeat);
+        double tFluidIntoWarmCoil = cold.t, q = 0.0;
+        if (ms > 0.0 && dT > 0.0) {
+            const double uaCold = coilConductance(cold.m);
+            const double uaWarm = coilConductance(warm.m);
+            auto coil = [cf](double ua, double c) {
+                const double cmin = std::min(c, cf), cmax = std::max(c, cf);
+                return Kernels::counterFlow(std::min(ua / cmin, kMaxNtu), cmin / cmax) * cmin;
+            };
+            const double epsCminCold = coil(uaCold, cCold);
+            auto rate = [&](double b) { return dT / (1.0 / coil(b * uaWarm, b * cWarm) + 1.0 / epsCminCold - 1.0 / cf); };
+            const WarmOutcome w = coolWarmStream(warm, cold.t, rate);
+            q = w.q;
+            tFluidIntoWarmCoil = warm.t - q / coil(w.b * uaWarm, w.b * cWarm);
+            const double tColdOut = cold.t + q / cCold;
+            (extractWarm ? teOut : tsOut) = w.tOut;
+            (extractWarm ? weOut : wsOut) = w.wOut;
+            (extractWarm ? condE : condS) = w.condensate;
+            (extractWarm ? tsOut : teOut) = tColdOut;
+            surface = tFluidIntoWarmCoil;
+            frost = Kernels::surfaceFrosts(surface, raw::vapourPressureFromHumidityRatio(warm.w, warm.p));
+        }
+        const double tFluidWarm = tFluidIntoWarmCoil + q / cf;
+        loop = RunAroundLoopState{kilogramsPerSecond(cf / cp),
+                                  celsius(extractWarm ? tFluidWarm : tFluidIntoWarmCoil),
+                                  celsius(extractWarm ? tFluidIntoWarmCoil : tFluidWarm),
+                                  watts(extractWarm ? q : -q), m_rating.pumpPower};
+    } else if (isPlate(kind)) {
+        if (ms > 0.0 && dT > 0.0) {
+            const FlowArrangement arrangement = arrangementOf(kind);
+            const double haWarm = conductancePerSide(warm.m), haCold = conductancePerSide(cold.m);
+            auto rate = [&](double b) {
+                const double cw = b * cWarm;
+                const double ua = 1.0 / (1.0 / (b * haWarm) + 1.0 / haCold);
+                const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
+                return Kernels::effectiveness(arrangement, std::min(ua / cmin, kMaxNtu), cmin / cmax,
+                                              kCrossCounterFlowPasses)
+                       * cmin * dT;
+            };
+            const WarmOutcome w = coolWarmStream(warm, cold.t, rate);
+            (extractWarm ? teOut : tsOut) = w.tOut;
+            (extractWarm ? weOut : wsOut) = w.wOut;
+            (extractWarm ? condE : condS) = w.condensate;
+            (extractWarm ? tsOut : teOut) = cold.t + w.q / cCold;
+            // Cold corner with the converged wet-side augmentation.
+            const double cw = w.b * cWarm, haW = w.b * haWarm;
+            const double ua = 1.0 / (1.0 / haW + 1.0 / haCold);
+            const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
+            surface = Kernels::coldCornerSurface(arrangement, cold.t, warm.t, w.tOut,
+                                                 std::min(ua / cmin, kMaxNtu), cmin / cmax, cw <= cCold,
+                                                 haCold / (haCold + haW));
+            frost = Kernels::surfaceFrosts(surface, raw::vapourPressureFromHumidityRatio(warm.w, warm.p));
+        }
+    } else { // rotors
+        if (ms > 0.0) {
+            const double cs = supIn.capacity(), ce = extIn.capacity();
+            const double ua = 1.0 / (1.0 / conductancePerSide(ms) + 1.0 / conductancePerSide(me));
+            const double cmin = std::min(cs, ce), cmax = std::max(cs, ce);
+            const double rotorRatio = toFraction(m_rating.ratedRotorCapacityRatio) * speed * m_ratedCapacityRate / cmin;
+            const double eps = Kernels::counterFlow(std::min(ua / cmin, kMaxNtu), cmax > 0.0 ? cmin / cmax : 0.0)
+                               * Kernels::rotorFactor(rotorRatio);
+            const double q = eps * cmin * (extIn.t - supIn.t); // to the supply air
+            tsOut = supIn.t + q / cs;
+            teOut = extIn.t - q / ce;
+            double epsW = 0.0;
+            if (transfersMoisture(kind)) {
+                epsW = std::min(1.0, toFraction(m_rating.ratedHumidityEfficiency) * eps
+                                         / toFraction(m_rating.ratedTemperatureEfficiency));
+                moisture = epsW * std::min(ms, me) * (extIn.w - supIn.w);
+            } else if (dT > 0.0) {
+                // Condensation rotor: water condensed from the cooled stream is
+                // taken up again by the heated one as far as it stays unsaturated.
+                const double tWarmOut = extractWarm ? teOut : tsOut;
+                const double tColdOut = extractWarm ? tsOut : teOut;
+                const double condensed = warm.m * std::max(0.0, warm.w - raw::satHumidityRatio(tWarmOut, warm.p));
+                const double room = cold.m * std::max(0.0, raw::satHumidityRatio(tColdOut, cold.p) - cold.w);
+                moisture = (extractWarm ? 1.0 : -1.0) * std::min(condensed, room);
+            }
+            wsOut = supIn.w + moisture / ms;
+            weOut = extIn.w - moisture / me;
+            // Energy by enthalpy bookkeeping: what the supply gains the extract loses.
+            const double qTotal = ms * (raw::enthalpy(tsOut, wsOut) - raw::enthalpy(supIn.t, supIn.w));
+            teOut = raw::dryBulbFromEnthalpy(raw::enthalpy(extIn.t, extIn.w) - qTotal / me, weOut);
+            supplyClampNeeded = wsOut > raw::satHumidityRatio(tsOut, supIn.p);
+            extractClampNeeded = weOut > raw::satHumidityRatio(teOut, extIn.p);
+            surface = cold.t;
+            if (dT > 0.0 && cold.t < 0.0) {
+                const double wEff = warm.w - epsW * (warm.w - cold.w);
+                frost = Kernels::mixingLineSupersaturation(cold.t, cold.w, warm.t, wEff, cold.p) > 0.0;
+            }
+        }
+    }
+
+    // Outlet states; a supersaturated rotor outlet is brought back to saturation.
+    auto outlet = [](double t, double w, double p, bool clamp, double m, double& condensate) {
+        if (!clamp)
+            return stateOf(t, w, p);
+        const Psychro::ProcessOutcome o = Psychro::clampToSaturation(celsius(t), kilogramsPerKilogram(w), pascals(p));
+        condensate += m * toKilogramsPerKilogram(o.condensate);
+        return o.outlet;
+    };
+    const Psychro::MoistAirState coreSupply = outlet(tsOut, wsOut, supIn.p, supplyClampNeeded, ms, condS);
+    const Psychro::MoistAirState extractOut = outlet(teOut, weOut, extIn.p, extractClampNeeded, me, condE);
+
+    Psychro::MoistAirState supplyOut = coreSupply;
+    if (ms <= 0.0) {
+        supplyOut = point.supplyInlet;
+    } else if (beta > 0.0) {
+        const Psychro::ProcessOutcome mixed =
+            Psychro::mix(coreSupply, kilogramsPerSecond(ms), point.supplyInlet, kilogramsPerSecond(msTotal - ms));
+        supplyOut = mixed.outlet;
+        condS += msTotal * toKilogramsPerKilogram(mixed.condensate);
+    }
+
+    const double tSup = toCelsius(supplyOut.dryBulb());
+    const double wSup = toKilogramsPerKilogram(supplyOut.humidityRatio());
+    const double dTin = extIn.t - supIn.t;
+    const double dWin = extIn.w - supIn.w;
+    auto pressureDrop = [&](Pressure rated, double m, const Psychro::MoistAirState& in) {
+        if (m <= 0.0)
+            return pascals(0.0);
+        // dp ~ rho^(x-1) V^x = m^x / rho (x = 1 laminar, 2 turbulent).
+        return rated * (std::pow(m / m_ratedMassFlow, m_dpExponent) * kReferenceAirDensity
+                        / toKilogramsPerCubicMetre(in.density()));
+    };
+
+    return ExchangerPerformance{
+        supplyOut,
+        extractOut,
+        watts(msTotal * supIn.cp * (tSup - supIn.t)),
+        watts(msTotal * (raw::enthalpy(tSup, wSup) - raw::enthalpy(supIn.t, supIn.w))),
+        fraction(dTin != 0.0 ? (tSup - supIn.t) / dTin : 0.0),
+        fraction(dWin != 0.0 ? (wSup - supIn.w) / dWin : 0.0),
+        kilogramsPerSecond(moisture),
+        kilogramsPerSecond(condS),
+        kilogramsPerSecond(condE),
+        pressureDrop(m_rating.ratedSupplyPressureDrop, ms, point.supplyInlet),
+        pressureDrop(m_rating.ratedExtractPressureDrop, me, point.extractInlet),
+        kind == ExchangerKind::RunAroundCoil ? m_rating.pumpPower : watts(0.0),
+        celsius(surface),
+        frost,
+        point.bypassFraction,
+        point.rotorSpeedRatio,
+        loop,
+    };
+}
+
+Ratio AirToAirExchanger::thermalEfficiencyEu1253() const
+{
+    const Pressure p = pascals(101325.0);
+    const ExchangerOperatingPoint point{
+        Psychro::MoistAirState::fromDryBulbHumidityRatio(celsius(5.0), kilogramsPerKilogram(0.0), p),
+        kilogramsPerSecond(m_ratedMassFlow),
+        Psychro::MoistAirState::fromDryBulbHumidityRatio(celsius(25.0), kilogramsPerKilogram(0.0), p),
+        kilogramsPerSecond(m_ratedMassFlow),
+    };
+    return evaluate(point).temperatureEffectiveness;
+}
+
+SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const ExchangerOperatingPoint& point,
+                                                                  AbsoluteTemperature setpoint) const
+{
+    const bool rotor = isRotary(m_rating.kind);
+    // Control value c: bypass fraction (1 = no recovery) or speed (0 = no recovery).
+    const double none = rotor ? 0.0 : 1.0;
+    const double full = rotor ? 1.0 : 0.0;
+    auto at = [&](double c) {
+        ExchangerOperatingPoint p = point;
+        (rotor ? p.rotorSpeedRatio : p.bypassFraction) = fraction(c);
+        return evaluate(p);
+    };
+    const double tIn = toCelsius(point.supplyInlet.dryBulb());
+    const double target = toCelsius(setpoint);
+    checkRange("supply temperature setpoint", target, Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC, "C",
+               "-100 .. 200 C");
+    ExchangerPerformance best = at(full);
+    const double tFull = toCelsius(best.supplyOutlet.dryBulb());
+    const double reach = tFull - tIn;
+    const double want = target - tIn;
+    constexpr double tolerance = 1e-6; // K
+
+    if (reach * want <= 0.0 || std::abs(reach) < tolerance) {
+        // Recovery would move away from the setpoint (or cannot move at all).
+        return {fraction(none), std::abs(want) < tolerance, at(none)};
+    }
+    if (std::abs(want) >= std::abs(reach))
+        return {fraction(full), std::abs(want - reach) < tolerance, best};
+
+    auto f = [&](double c) { return toCelsius(at(c).supplyOutlet.dryBulb()) - target; };
+    const double c = findBracketedRoot(f, none, full, -want, reach - want, 1e-9).x;
+    return {fraction(c), true, at(c)};
+}
+
+std::optional<AbsoluteTemperature>
+AirToAirExchanger::frostOnsetOutdoorTemperature(const Psychro::MoistAirState& extract,
+                                                Ratio outdoorRelativeHumidity) const
+{
+    return Recovery::frostOnsetOutdoorTemperature(m_rating.kind, extract, m_rating.ratedTemperatureEfficiency,
+                                                  m_rating.ratedHumidityEfficiency, outdoorRelativeHumidity);
+}
+
+} // namespace Airwright::Core::Recovery

@@ -1,0 +1,132 @@
+#pragma once
+// Raw-double kernels behind EffectivenessNtu.h, shared by the recovery layer's
+// hot loops. Inputs are assumed valid (checked at the public boundary).
+
+#include "airwright/core/recovery/FlowArrangement.h"
+
+#include <cmath>
+
+namespace Airwright::Core::Recovery::Kernels {
+
+// |1 - Cr| below this is treated as balanced flow (closed Cr = 1 limits).
+inline constexpr double kBalancedTolerance = 1e-12;
+// Cr N below this is treated as Cr = 0 (the error is of order Cr N).
+inline constexpr double kZeroCapacityTolerance = 1e-12;
+
+inline double counterFlow(double n, double cr)
+{
+    const double delta = 1.0 - cr;
+    if (delta < kBalancedTolerance)
+        return n / (1.0 + n);
+    // 1 - Cr e^-x written as (1 - e^-x) + (1 - Cr) e^-x: no cancellation near Cr = 1.
+    const double x = n * delta;
+    const double oneMinusE = -std::expm1(-x);
+    return oneMinusE / (oneMinusE + delta * std::exp(-x));
+}
+
+inline double parallelFlow(double n, double cr) { return -std::expm1(-n * (1.0 + cr)) / (1.0 + cr); }
+
+inline double crossFlowCmaxMixed(double n, double cr)
+{
+    if (cr * n < kZeroCapacityTolerance)
+        return -std::expm1(-n);
+    return -std::expm1(cr * std::expm1(-n)) / cr;
+}
+
+inline double crossFlowCminMixed(double n, double cr)
+{
+    if (cr * n < kZeroCapacityTolerance)
+        return -std::expm1(-n);
+    return -std::expm1(std::expm1(-cr * n) / cr);
+}
+
+// Exact series for unmixed cross-flow (see EffectivenessNtu.h). P(k, x) is kept
+// as 1 - e^-x sum_{m<k} x^m/m!, reduced term by term from -expm1(-x): the
+// subtraction stays accurate to ~1e-16 absolute, which is what the sum needs.
+inline double crossFlowBothUnmixed(double n, double cr)
+{
+    if (n <= 0.0)
+        return 0.0;
+    const double x = cr * n;
+    if (x < kZeroCapacityTolerance)
+        return -std::expm1(-n);
+    // e^-x and 1 - e^-x from one call: expm1 where 1 - e^-x is small, exp where
+    // e^-x is (each then exact to rounding).
+    auto split = [](double v, double& e, double& oneMinusE) {
+        if (v < 1.0) {
+            oneMinusE = -std::expm1(-v);
+            e = 1.0 - oneMinusE;
+        } else {
+            e = std::exp(-v);
+            oneMinusE = 1.0 - e;
+        }
+    };
+    double tN, pN, tX, pX;
+    split(n, tN, pN);
+    split(x, tX, pX);
+    double sum = pN * pX;
+    for (int k = 1; k < 2000; ++k) {
+        tN *= n / k;
+        tX *= x / k;
+        pN -= tN;
+        pX -= tX;
+        if (pN <= 0.0 || pX <= 0.0)
+            break;
+        const double term = pN * pX;
+        sum += term;
+        if (term < 1e-16 * sum)
+            break;
+    }
+    return sum / x;
+}
+
+// n passes of a per-pass effectiveness in overall counter-flow, streams mixed
+// between passes (Incropera eq. 11.31b,c).
+inline double multiPassCounter(double passEps, double cr, int passes)
+{
+    const double delta = 1.0 - cr;
+    if (delta < kBalancedTolerance)
+        return passes * passEps / (1.0 + (passes - 1) * passEps);
+    // r = ((1 - eps1 Cr) / (1 - eps1))^n = (1 + eps1 delta / (1 - eps1))^n
+    const double rMinusOne = std::expm1(passes * std::log1p(passEps * delta / (1.0 - passEps)));
+    return rMinusOne / (rMinusOne + delta);
+}
+
+inline double crossCounterFlow(double n, double cr, int passes)
+{
+    if (n <= 0.0)
+        return 0.0;
+    const double passEps = crossFlowBothUnmixed(n / passes, cr);
+    if (passEps >= 1.0)
+        return 1.0;
+    return multiPassCounter(passEps, cr, passes);
+}
+
+inline double effectiveness(FlowArrangement arrangement, double n, double cr, int crossCounterPasses)
+{
+    switch (arrangement) {
+    case FlowArrangement::CounterFlow:
+        return counterFlow(n, cr);
+    case FlowArrangement::CrossFlowBothUnmixed:
+        return crossFlowBothUnmixed(n, cr);
+    case FlowArrangement::CrossFlowCminMixed:
+        return crossFlowCminMixed(n, cr);
+    case FlowArrangement::CrossFlowCmaxMixed:
+        return crossFlowCmaxMixed(n, cr);
+    case FlowArrangement::ParallelFlow:
+        return parallelFlow(n, cr);
+    case FlowArrangement::CrossCounterFlow:
+        return crossCounterFlow(n, cr, crossCounterPasses);
+    }
+    return 0.0;
+}
+
+// Rotary regenerator capacity factor f(Cr_r) (see EffectivenessNtu.h).
+inline double rotorFactor(double rotorCapacityRatio)
+{
+    if (rotorCapacityRatio >= 1.0)
+        return 1.0 - 1.0 / (9.0 * std::pow(rotorCapacityRatio, 1.93));
+    return (8.0 / 9.0) * rotorCapacityRatio;
+}
+
+} // namespace Airwright::Core::Recovery::Kernels

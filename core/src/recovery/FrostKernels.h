@@ -1,0 +1,87 @@
+#pragma once
+// Raw-double kernels behind FrostOnset.h, shared with the exchanger model's hot
+// path. Temperatures in degC, pressure in Pa, humidity ratio in kg/kg.
+
+#include "EffectivenessKernels.h"
+
+#include "airwright/core/psychro/PsychroRaw.h"
+#include "airwright/core/recovery/EffectivenessNtu.h"
+
+#include <algorithm>
+#include <cmath>
+
+namespace Airwright::Core::Recovery::Kernels {
+
+// Wall temperature at the cold corner of a recuperator (docs/frost.md).
+// m = Cmin / C_warm. The warm stream's local temperature at the corner:
+//  counter-flow: its mixed outlet;
+//  unmixed cross-flow: the warm fluid strip running along the cold stream's
+//    entry edge sees the cold inlet temperature all the way, so it decays as
+//    t_c + (t_w,in - t_c) exp(-UA / C_warm);
+//  cross-counter-flow: the same inside the last (coldest) of the passes, whose
+//    warm inlet follows from that pass's balance;
+//  other arrangements: the mixed outlet (not used for plates).
+inline double coldCornerSurface(FlowArrangement arrangement, double tCold, double tWarmIn, double tWarmOut,
+                                double ntu, double cr, bool warmIsCmin, double coldWeight)
+{
+    const double m = warmIsCmin ? 1.0 : cr;
+    double corner = tWarmOut;
+    switch (arrangement) {
+    case FlowArrangement::CrossFlowBothUnmixed:
+        corner = tCold + (tWarmIn - tCold) * std::exp(-ntu * m);
+        break;
+    case FlowArrangement::CrossCounterFlow: {
+        const double passes = kCrossCounterFlowPasses;
+        const double passEps = crossFlowBothUnmixed(ntu / passes, cr);
+        const double k = passEps * m;
+        const double warmIntoLastPass = k < 1.0 ? (tWarmOut - k * tCold) / (1.0 - k) : tWarmOut;
+        corner = tCold + (warmIntoLastPass - tCold) * std::exp(-ntu * m / passes);
+        break;
+    }
+    default:
+        break;
+    }
+    return coldWeight * tCold + (1.0 - coldWeight) * corner;
+}
+
+// Below 0 C and below the warm stream's dew/frost point (pws over ice there).
+inline bool surfaceFrosts(double tSurface, double warmVapourPressure)
+{
+    return tSurface < 0.0 && Psychro::detail::satPressure(tSurface) < warmVapourPressure;
+}
+
+// Largest W_line(t) - Ws(t) on the part of the line from (tCold, wCold) to
+// (tWarm, wWarmEffective) that lies below 0 C; the curve is convex and the line
+// straight, so the difference is concave and a golden-section search finds its
+// maximum. Positive: the line crosses into the supersaturated region.
+inline double mixingLineSupersaturation(double tCold, double wCold, double tWarm, double wWarmEffective, double p)
+{
+    namespace raw = Psychro::detail;
+    const double upper = std::min(tWarm, 0.0);
+    if (!(upper > tCold) || !(tWarm > tCold))
+        return wCold - raw::satHumidityRatio(tCold, p);
+    const double slope = (wWarmEffective - wCold) / (tWarm - tCold);
+    auto d = [&](double t) { return wCold + slope * (t - tCold) - raw::satHumidityRatio(t, p); };
+    constexpr double invPhi = 0.6180339887498949;
+    double a = tCold, b = upper;
+    double x1 = b - invPhi * (b - a), x2 = a + invPhi * (b - a);
+    double f1 = d(x1), f2 = d(x2);
+    while (b - a > 1e-3) {
+        if (f1 < f2) {
+            a = x1;
+            x1 = x2;
+            f1 = f2;
+            x2 = a + invPhi * (b - a);
+            f2 = d(x2);
+        } else {
+            b = x2;
+            x2 = x1;
+            f2 = f1;
+            x1 = b - invPhi * (b - a);
+            f1 = d(x1);
+        }
+    }
+    return std::max({f1, f2, d(tCold), d(upper)});
+}
+
+} // namespace Airwright::Core::Recovery::Kernels

@@ -1,0 +1,36 @@
+#include "airwright/core/recovery/BracketedRoot.h"
+
+#include <gtest/gtest.h>
+
+#include <cmath>
+
+using Airwright::Core::Recovery::findBracketedRoot;
+
+TEST(BracketedRoot, ConvergesInsideTheBracket)
+{
+    // Dottie number: the root of cos x = x, 0.739085133215160641655312... (a
+    // classical constant; tolerance 1e-12).
+    const auto r = findBracketedRoot([](double x) { return std::cos(x) - x; }, 0.0, 1.0, 1e-13);
+    EXPECT_NEAR(r.x, 0.7390851332151607, 1e-12);
+    EXPECT_LT(r.evaluations, 15);
+    // Cube root of 2 on a wide bracket, superlinear: far fewer steps than bisection's ~45.
+    const auto c = findBracketedRoot([](double x) { return x * x * x - 2.0; }, 0.0, 100.0, 1e-12);
+    EXPECT_NEAR(c.x, std::cbrt(2.0), 1e-11);
+    EXPECT_LT(c.evaluations, 40);
+}
+
+TEST(BracketedRoot, StaysInBracketForAStepFunction)
+{
+    // A discontinuous sign change: Brent falls back to bisection and still
+    // brackets the jump to the tolerance.
+    const auto r = findBracketedRoot([](double x) { return x < 0.3 ? -1.0 : 1.0; }, 0.0, 1.0, 1e-10);
+    EXPECT_NEAR(r.x, 0.3, 1e-9);
+    EXPECT_GE(r.x, 0.0);
+    EXPECT_LE(r.x, 1.0);
+}
+
+TEST(BracketedRoot, RootAtAnEnd)
+{
+    const auto r = findBracketedRoot([](double x) { return x - 2.0; }, 2.0, 5.0, 1e-12);
+    EXPECT_EQ(r.x, 2.0);
+}

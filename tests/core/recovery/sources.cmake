@@ -1,0 +1,6 @@
+list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
+    core/recovery/EffectivenessNtuTest.cpp
+    core/recovery/AirToAirExchangerTest.cpp
+    core/recovery/FrostOnsetTest.cpp
+    core/recovery/BracketedRootTest.cpp
+)
