@@ -1,3 +1,5 @@
 set(AIRWRIGHT_BENCH_SOURCES
     PsychroBench.cpp
+    RecoveryBench.cpp
+    ChainBench.cpp
 )
