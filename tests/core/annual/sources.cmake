@@ -1,0 +1,9 @@
+list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
+    core/annual/EpwReaderTest.cpp
+    core/annual/EpwWriterTest.cpp
+    core/annual/BinTableReaderTest.cpp
+    core/annual/WeatherYearTest.cpp
+    core/annual/RandomStreamTest.cpp
+    core/annual/SyntheticClimateTest.cpp
+    core/annual/DemoClimateTest.cpp
+)
