@@ -162,7 +162,7 @@ SectionOutcome Filter::compute(const AirStream& inlet, const SectionContext& con
         dp = detail.finalDrop;
 
     SectionOutcome outcome{inlet, dp, MassFlow{}, MassFlow{}, {}};
-    if (detail.relativeHumidity.value() > 0.9)
+    if (detail.relativeHumidity.value() > 0.9 + 1e-6)
         outcome.findings.push_back(
             {Severity::Warning, "filter.humidity", "",
              "relative humidity at the filter is " + formatFixed(toPercent(detail.relativeHumidity), 0)
