@@ -1,11 +1,89 @@
 # The window, document, editors, undo commands and file handling. The views
 # (charts, tables) list their files in src/views/sources.cmake.
 set(AIRWRIGHT_UI_SOURCES
-    include/airwright/ui/MainWindow.h
-    src/MainWindow.cpp
+    include/airwright/ui/AddSectionCommand.h
+    src/AddSectionCommand.cpp
+    include/airwright/ui/AppSettings.h
+    src/AppSettings.cpp
+    include/airwright/ui/Appearance.h
+    src/Appearance.cpp
+    include/airwright/ui/CasesEditor.h
+    src/CasesEditor.cpp
+    include/airwright/ui/CasesModel.h
+    src/CasesModel.cpp
+    include/airwright/ui/CautionsDialog.h
+    src/CautionsDialog.cpp
+    include/airwright/ui/ChoiceDelegate.h
+    src/ChoiceDelegate.cpp
+    include/airwright/ui/DuplicateSectionCommand.h
+    src/DuplicateSectionCommand.cpp
+    include/airwright/ui/EditAirflowsCommand.h
+    src/EditAirflowsCommand.cpp
+    include/airwright/ui/EditCasesCommand.h
+    src/EditCasesCommand.cpp
+    include/airwright/ui/EditCasingCommand.h
+    src/EditCasingCommand.cpp
+    include/airwright/ui/EditInfoCommand.h
+    src/EditInfoCommand.cpp
+    include/airwright/ui/EditSectionCommand.h
+    src/EditSectionCommand.cpp
+    include/airwright/ui/EditSiteCommand.h
+    src/EditSiteCommand.cpp
+    include/airwright/ui/EditValidator.h
+    src/EditValidator.cpp
+    include/airwright/ui/FieldForm.h
+    src/FieldForm.cpp
+    include/airwright/ui/FieldQuantity.h
+    src/FieldQuantity.cpp
+    include/airwright/ui/FieldRow.h
+    src/FieldRow.cpp
+    include/airwright/ui/FieldSpec.h
     include/airwright/ui/GuiApplication.h
     src/GuiApplication.cpp
+    include/airwright/ui/MainWindow.h
+    src/MainWindow.cpp
+    include/airwright/ui/MoveSectionCommand.h
+    src/MoveSectionCommand.cpp
+    include/airwright/ui/PathsCommand.h
+    src/PathsCommand.cpp
     include/airwright/ui/ProjectDocument.h
     src/ProjectDocument.cpp
+    include/airwright/ui/ProjectEditor.h
+    src/ProjectEditor.cpp
+    include/airwright/ui/ProjectTemplate.h
+    src/ProjectTemplate.cpp
+    include/airwright/ui/RecoveryFile.h
+    src/RecoveryFile.cpp
+    include/airwright/ui/RemoveSectionCommand.h
+    src/RemoveSectionCommand.cpp
+    include/airwright/ui/ResourceLocator.h
+    src/ResourceLocator.cpp
+    include/airwright/ui/ScreenshotWriter.h
+    src/ScreenshotWriter.cpp
+    include/airwright/ui/SectionCatalog.h
+    src/SectionCatalog.cpp
+    include/airwright/ui/SectionEditor.h
+    src/SectionEditor.cpp
+    include/airwright/ui/SectionFields.h
+    src/SectionFields.cpp
+    include/airwright/ui/SectionPalette.h
+    src/SectionPalette.cpp
+    include/airwright/ui/SectionPaths.h
+    src/SectionPaths.cpp
+    include/airwright/ui/SectionSymbol.h
+    src/SectionSymbol.cpp
+    include/airwright/ui/UnitDrawing.h
+    src/UnitDrawing.cpp
+    include/airwright/ui/UnitPanel.h
+    src/UnitPanel.cpp
+    include/airwright/ui/ValueCommand.h
 )
+list(APPEND AIRWRIGHT_UI_SOURCES resources.qrc) # the program icon; GuiApplication initialises it
+set_target_properties(airwright_ui PROPERTIES AUTORCC ON)
 include("${CMAKE_CURRENT_LIST_DIR}/src/views/sources.cmake")
+
+# Where the demo project lives in the source tree (ResourceLocator falls back to
+# paths next to the executable), and the version for Help > About.
+target_compile_definitions(airwright_ui PRIVATE
+    AIRWRIGHT_RESOURCES_DIR="${PROJECT_SOURCE_DIR}/resources"
+    AIRWRIGHT_VERSION="${PROJECT_VERSION}")

@@ -1,7 +1,9 @@
 #include "airwright/cli/CliApplication.h"
 
 #include "airwright/cli/ExitCode.h"
+#include "airwright/cli/ComputeCommand.h"
 #include "airwright/cli/StateCommand.h"
+#include "airwright/cli/ValidateCommand.h"
 #include "airwright/core/InputError.h"
 
 #include <exception>
@@ -13,6 +15,8 @@ namespace Airwright::Cli {
 CliApplication::CliApplication()
 {
     addCommand(std::make_unique<StateCommand>());
+    addCommand(std::make_unique<ValidateCommand>());
+    addCommand(std::make_unique<ComputeCommand>());
 }
 
 CliApplication::~CliApplication() = default;

@@ -1,4 +1,13 @@
 set(AIRWRIGHT_UI_TEST_SOURCES
     ui/UiTestMain.cpp
+    ui/UiTestSupport.h
+    ui/DocumentCommandsTest.cpp
+    ui/DocumentResultsTest.cpp
+    ui/DocumentFileTest.cpp
+    ui/SectionEditorTest.cpp
+    ui/CasesModelTest.cpp
+    ui/UnitDrawingTest.cpp
+    ui/RecoveryTest.cpp
+    ui/MainWindowTest.cpp
 )
 include("${CMAKE_CURRENT_LIST_DIR}/views/sources.cmake")

@@ -11,4 +11,16 @@ list(APPEND AIRWRIGHT_CORE_SOURCES
     src/annual/RandomStream.cpp
     src/annual/SyntheticClimate.cpp
     src/annual/DemoClimate.cpp
+    src/annual/OperatingSchedule.cpp
+    src/annual/SeasonalConditions.cpp
+    src/annual/AnnualEnergy.cpp
+    src/annual/AnnualSettings.cpp
+    src/annual/ExchangerTable.cpp
+    src/annual/UnitHourModel.cpp
+    src/annual/AnnualSimulation.cpp
+    src/annual/EnergyPrices.cpp
+    src/annual/ComparisonSettings.cpp
+    src/annual/HeatRecoveryOption.cpp
+    src/annual/OptionRanking.cpp
+    src/annual/HeatRecoveryComparison.cpp
 )

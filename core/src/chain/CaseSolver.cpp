@@ -3,10 +3,14 @@
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
 #include "airwright/core/chain/ChainSolver.h"
+#include "airwright/core/psychro/PsychroRaw.h"
 #include "airwright/core/psychro/Psychrometrics.h"
 
 #include <algorithm>
 #include <cmath>
+#include <cstdio>
+#include <cstdlib>
+#include <limits>
 
 namespace Airwright::Core::Chain {
 
@@ -14,6 +18,11 @@ namespace {
 
 constexpr double kStandardAirDensity = 1.2; // kg/m3, moist air (EN 13053, common practice)
 constexpr double kConvergence = 1e-4;       // K; W and p scaled to match, see largestChange
+// A fan is computed again in the same pass when the drops it serves moved by more
+// than this since (1 % of what the convergence test sees, Pa).
+constexpr double kFanPressureTolerance = 2e-2;
+constexpr int kFanSweeps = 3;
+constexpr std::size_t kNone = static_cast<std::size_t>(-1);
 
 template <class T> const T* specAs(const Section& s)
 {
@@ -39,9 +48,54 @@ bool isHeating(const Section& s)
     return specAs<Sections::WaterHeatingCoil>(s) || specAs<Sections::ElectricHeater>(s);
 }
 
+bool isFan(const Section& s) { return specAs<Sections::Fan>(s) != nullptr; }
+
+std::size_t firstFan(const std::vector<Section>& path)
+{
+    const auto it = std::find_if(path.begin(), path.end(), isFan);
+    return static_cast<std::size_t>(it - path.begin());
+}
+
+// Sections whose outcome depends on the temperature target (coils); the others
+// ignore it, so a new target does not make them compute again.
+bool usesTarget(const Section& s)
+{
+    return specAs<Sections::WaterHeatingCoil>(s) || specAs<Sections::ElectricHeater>(s)
+           || specAs<Sections::CoolingCoil>(s);
+}
+
+// States in results are valid by construction, so the raw formulas of
+// Psychrometrics.h serve (the same numbers without the range checks).
+double rawEnthalpy(const Psychro::MoistAirState& s)
+{
+    return Psychro::detail::enthalpy(toCelsius(s.dryBulb()), s.humidityRatio().value());
+}
+
 Power enthalpyFlowChange(const Sections::AirStream& in, const Sections::AirStream& out)
 {
-    return out.dryAir * out.state.enthalpy() - in.dryAir * in.state.enthalpy();
+    return watts(out.dryAir.value() * rawEnthalpy(out.state) - in.dryAir.value() * rawEnthalpy(in.state));
+}
+
+VolumeFlow volumeFlowOf(const Sections::AirStream& s)
+{
+    const auto& st = s.state;
+    return cubicMetresPerSecond(
+        s.dryAir.value()
+        * Psychro::detail::specificVolume(toCelsius(st.dryBulb()), st.humidityRatio().value(), st.pressure().value()));
+}
+
+// A target as a plain number for the memo key (NaN: none). GCC 12 at -O3 warns,
+// wrongly, about comparing optional quantities.
+double targetKey(const std::optional<AbsoluteTemperature>& t)
+{
+    return t ? t->value() : std::numeric_limits<double>::quiet_NaN();
+}
+
+bool sameKey(double a, double b) { return a == b || (std::isnan(a) && std::isnan(b)); }
+
+bool sameStream(const Sections::AirStream& a, const Sections::AirStream& b)
+{
+    return a.state == b.state && a.dryAir.value() == b.dryAir.value();
 }
 
 SectionResult makeResult(const Section& section, PathKind path, const Sections::AirStream& inlet,
@@ -56,7 +110,7 @@ SectionResult makeResult(const Section& section, PathKind path, const Sections::
     r.outlet = outlet;
     r.staticPressureIn = pIn;
     r.staticPressureOut = pIn - dp;
-    r.inletFlow = inlet.volumeFlow();
+    r.inletFlow = volumeFlowOf(inlet);
     r.faceVelocity = faceVelocity;
     r.pressureDrop = dp;
     r.duty = enthalpyFlowChange(inlet, outlet);
@@ -65,13 +119,6 @@ SectionResult makeResult(const Section& section, PathKind path, const Sections::
     r.length = sectionLength(section.spec);
     r.detail = std::move(detail);
     return r;
-}
-
-void tagFindings(std::vector<Finding>& findings, const std::string& id)
-{
-    for (auto& f : findings)
-        if (f.sectionId.empty())
-            f.sectionId = id;
 }
 
 } // namespace
@@ -101,10 +148,15 @@ CaseSolver::CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase
         m_maxHumidity = Psychro::humidityRatioFromRelativeHumidity(designCase.supplySetpoint,
                                                                    *designCase.maximumSupplyHumidity, m_pressure);
 
+    m_supplyCoupling.assign(unit.supply.size(), kNone);
+    m_extractCoupling.assign(unit.extract.size(), kNone);
+    m_supplyControlled.assign(unit.supply.size(), false);
+    m_couplings.reserve(unit.supply.size());
     for (std::size_t i = 0; i < unit.supply.size(); ++i) {
+        m_supplyControlled[i] = isTemperatureControlled(unit.supply[i]);
         if (!isCoupled(unit.supply[i].spec))
             continue;
-        Coupling c;
+        Coupling& c = m_couplings.emplace_back();
         c.id = unit.supply[i].id;
         c.supplyIndex = i;
         if (const auto* hr = specAs<Recovery::HeatRecovery>(unit.supply[i]))
@@ -112,12 +164,13 @@ CaseSolver::CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase
         for (std::size_t j = 0; j < unit.extract.size(); ++j)
             if (unit.extract[j].id == c.id)
                 c.extractIndex = j;
-        m_couplings.push_back(c);
+        m_supplyCoupling[i] = m_couplings.size() - 1;
+        if (c.extractIndex < unit.extract.size() && unit.extract[c.extractIndex].id == c.id)
+            m_extractCoupling[c.extractIndex] = m_couplings.size() - 1;
     }
-    m_supplyFanPressure.assign(unit.supply.size(), Pressure{});
-    m_extractFanPressure.assign(unit.extract.size(), Pressure{});
-    m_supplyFindings.resize(unit.supply.size());
-    m_extractFindings.resize(unit.extract.size());
+    m_supply.resize(unit.supply.size());
+    m_extract.resize(unit.extract.size());
+    m_drift.assign(unit.supply.size(), TemperatureDifference{});
     computeFlows();
 }
 
@@ -174,262 +227,416 @@ Sections::SectionContext CaseSolver::contextFor(const Sections::AirStream& inlet
 {
     Sections::SectionContext ctx;
     ctx.crossSection = m_sizing.crossSection;
-    ctx.faceVelocity = inlet.volumeFlow() / m_sizing.crossSection;
+    ctx.faceVelocity = volumeFlowOf(inlet) / m_sizing.crossSection;
     ctx.filterCondition = m_case.filterCondition;
     ctx.fanTotalPressure = fanPressure;
     return ctx;
 }
 
-void CaseSolver::extractPass()
+void CaseSolver::computeSection(const Section& section, Slot& slot, const Sections::AirStream& air,
+                                const Sections::SectionContext& ctx, Pressure pIn)
+{
+    const Pressure fanPressure = ctx.fanTotalPressure;
+    const double target = usesTarget(section) ? targetKey(ctx.target.outletTemperature)
+                                              : std::numeric_limits<double>::quiet_NaN();
+    const bool unchanged = slot.computed && sameStream(slot.inlet, air) && slot.fanPressure == fanPressure
+                           && sameKey(slot.target, target) && slot.dehumidify == ctx.target.dehumidify;
+    if (unchanged) {
+        slot.staticPressureIn = pIn;
+        slot.staticPressureOut = pIn - slot.pressureDrop;
+        return;
+    }
+    Sections::SectionOutcome outcome;
+    std::visit(
+        [&](const auto& spec) {
+            using T = std::decay_t<decltype(spec)>;
+            if constexpr (std::is_same_v<T, Sections::MixingBox> || std::is_same_v<T, Recovery::HeatRecovery>
+                          || std::is_same_v<T, CoupledSide>) {
+                throw Error("internal: coupled section " + section.id + " computed as a plain one");
+            } else {
+                typename T::Detail d;
+                outcome = spec.compute(air, ctx, d);
+                slot.detail = d;
+            }
+        },
+        section.spec);
+    const Pressure pOut = pIn - outcome.pressureDrop;
+    slot.computed = true;
+    slot.inlet = air;
+    slot.fanPressure = fanPressure;
+    slot.target = target;
+    slot.dehumidify = ctx.target.dehumidify;
+    slot.outlet = outcome.outlet;
+    slot.pressureDrop = outcome.pressureDrop;
+    slot.waterAdded = outcome.waterAdded;
+    slot.waterRemoved = outcome.waterRemoved;
+    slot.faceVelocity = ctx.faceVelocity;
+    slot.findings = std::move(outcome.findings);
+    for (auto& f : slot.findings)
+        if (f.sectionId.empty())
+            f.sectionId = section.id;
+    slot.cooledBelowTarget = specAs<Sections::CoolingCoil>(section) && !std::isnan(target)
+                             && outcome.outlet.state.dryBulb().value() < target - 0.05;
+    slot.staticPressureIn = pIn;
+    slot.staticPressureOut = pOut;
+}
+
+Pressure CaseSolver::fanPressure(const std::vector<Section>& path, std::vector<Slot>& slots, std::size_t k,
+                                 const Sections::AirStream& air, Pressure externalTotal, bool supply)
+{
+    Pressure internal{};
+    int fans = 0;
+    for (std::size_t j = 0; j < path.size(); ++j) {
+        if (isFan(path[j])) {
+            ++fans;
+            continue;
+        }
+        Slot& s = slots[j];
+        if (!s.computed && j > k && !isCoupled(path[j].spec) && !std::holds_alternative<CoupledSide>(path[j].spec)) {
+            // First pass: a section after the fan has no drop yet; compute it ahead
+            // with the air at the fan (its inlet differs a little, so the real pass
+            // computes it again).
+            Sections::AirStream ahead = air;
+            ahead.dryAir = supply ? m_supplyInFlow[j] : m_extractInFlow[j];
+            auto ctx = contextFor(ahead, Pressure{});
+            ctx.pathDesignFlow = supply ? m_supplyDesignFlow : m_extractDesignFlow;
+            if (supply) {
+                ctx.target.outletTemperature = m_case.supplySetpoint - m_drift[j];
+                ctx.target.minHumidity = m_minHumidity;
+                ctx.target.maxHumidity = m_maxHumidity;
+                ctx.target.dehumidify = m_maxHumidity.has_value();
+            }
+            computeSection(path[j], s, ahead, ctx, Pressure{});
+        }
+        if (s.computed)
+            internal += s.pressureDrop;
+    }
+    // Fans in series share the work equally.
+    return fans > 0 ? (internal + externalTotal) / static_cast<double>(fans) : Pressure{};
+}
+
+void CaseSolver::extractPass(bool untilFirstExchanger, std::size_t from)
 {
     const auto& path = m_unit.extract;
-    m_previousExtract = std::move(m_extract);
-    m_extract.clear();
-    m_extract.reserve(path.size());
+    const auto& flows = m_unit.airflows;
     Sections::AirStream air{*m_room, m_extractFlow};
-    Pressure p = -m_unit.airflows.extractExternalBefore;
+    Pressure p = -flows.extractExternalBefore;
+    if (from > 0) { // the sections before are as the last pass left them
+        air = m_extract[from - 1].outlet;
+        p = m_extract[from - 1].staticPressureOut;
+    }
 
-    for (std::size_t k = 0; k < path.size(); ++k) {
+    for (std::size_t k = from; k < path.size(); ++k) {
         const auto& section = path[k];
+        Slot& slot = m_extract[k];
         air.dryAir = m_extractInFlow[k];
-        auto ctx = contextFor(air, m_extractFanPressure[k]);
-        ctx.pathDesignFlow = m_extractDesignFlow;
-        auto& findings = m_extractFindings[k];
-        findings.clear();
 
         if (std::holds_alternative<CoupledSide>(section.spec)) {
-            auto& c = coupling(section.id);
+            auto& c = m_couplings[m_extractCoupling[k]];
             c.extractInlet = air;
             const auto& supplySection = m_unit.supply[c.supplyIndex];
+            Sections::AirStream out;
+            Pressure dp;
+            MassFlow removed;
             if (const auto* mix = specAs<Sections::MixingBox>(supplySection)) {
-                Sections::AirStream out = air;
+                out = air;
                 out.dryAir = k + 1 < path.size() ? m_extractInFlow[k + 1] : air.dryAir - c.recirculated;
                 if (out.dryAir.value() < 0.0)
                     out.dryAir = kilogramsPerSecond(0.0);
-                const Pressure dp = Sections::dynamicPressureDrop(mix->lossCoefficient, air.density(), ctx.faceVelocity);
-                Sections::MixingBox::Detail detail{mix->outdoorShare(m_supplyDesignFlow), c.recirculated};
-                m_extract.push_back(makeResult(supplySection, PathKind::Extract, air, out, p, dp, ctx.faceVelocity,
-                                               MassFlow{}, MassFlow{}, detail));
+                const Velocity v = volumeFlowOf(air) / m_sizing.crossSection;
+                dp = Sections::dynamicPressureDrop(mix->lossCoefficient, air.density(), v);
+                slot.detail = Sections::MixingBox::Detail{mix->outdoorShare(m_supplyDesignFlow), c.recirculated};
+                slot.faceVelocity = v;
             } else {
-                // The supply pass of the previous iteration evaluated the exchanger with
-                // this path's state then; at convergence the two agree. The first pass
-                // has no supply state yet and assumes outdoor air at the exchanger.
                 if (!c.recovery) {
-                    Recovery::HeatRecoveryInputs in;
-                    in.supplyIn = Sections::AirStream{*m_outdoor, m_supplyInFlow[c.supplyIndex]};
-                    in.extractIn = air;
-                    in.supplyTarget = m_case.supplySetpoint;
-                    c.recovery = c.evaluator->evaluate(in);
+                    if (untilFirstExchanger)
+                        return; // the supply pass evaluates it first
+                    throw Error("internal: exchanger " + c.id + " not evaluated by the supply pass");
                 }
-                const auto& out = *c.recovery;
-                findings = out.findings;
-                m_extract.push_back(makeResult(supplySection, PathKind::Extract, air, out.extractOut, p,
-                                               out.extractPressureDrop, ctx.faceVelocity, MassFlow{},
-                                               out.detail.condensate, out.detail));
+                // The supply pass evaluated the exchanger with the extract air of
+                // the pass before; at convergence the two agree (finish() reports
+                // the extract side of the final evaluation).
+                out = c.recovery->extractOut;
+                dp = c.recovery->extractPressureDrop;
+                removed = c.recovery->detail.condensate;
+                if (!sameStream(slot.inlet, air) || !slot.computed)
+                    slot.faceVelocity = volumeFlowOf(air) / m_sizing.crossSection;
             }
+            const Pressure pOut = p - dp;
+            slot.computed = true;
+            slot.inlet = air;
+            slot.outlet = out;
+            slot.pressureDrop = dp;
+            slot.waterRemoved = removed;
+            slot.staticPressureIn = p;
+            slot.staticPressureOut = pOut;
         } else {
-            Sections::SectionOutcome outcome;
-            SectionDetail detail;
-            std::visit(
-                [&](const auto& spec) {
-                    using T = std::decay_t<decltype(spec)>;
-                    if constexpr (std::is_same_v<T, Sections::MixingBox> || std::is_same_v<T, Recovery::HeatRecovery>
-                                  || std::is_same_v<T, CoupledSide>) {
-                        throw Error("internal: coupled section in the extract path");
-                    } else {
-                        typename T::Detail d;
-                        outcome = spec.compute(air, ctx, d);
-                        detail = d;
-                    }
-                },
-                section.spec);
-            findings = std::move(outcome.findings);
-            m_extract.push_back(makeResult(section, PathKind::Extract, air, outcome.outlet, p, outcome.pressureDrop,
-                                           ctx.faceVelocity, outcome.waterAdded, outcome.waterRemoved,
-                                           std::move(detail)));
+            const Pressure fan = isFan(section)
+                                     ? fanPressure(path, m_extract, k, air,
+                                                   flows.extractExternalBefore + flows.extractExternalAfter, false)
+                                     : Pressure{};
+            if (slot.computed && sameStream(slot.inlet, air) && slot.fanPressure == fan) {
+                slot.staticPressureIn = p;
+                slot.staticPressureOut = p - slot.pressureDrop;
+            } else {
+                auto ctx = contextFor(air, fan);
+                ctx.pathDesignFlow = m_extractDesignFlow;
+                computeSection(section, slot, air, ctx, p);
+            }
         }
-        tagFindings(findings, section.id);
-        air = m_extract.back().outlet;
-        p = m_extract.back().staticPressureOut;
+        air = slot.outlet;
+        p = slot.staticPressureOut;
     }
 }
 
-void CaseSolver::supplyPass()
+void CaseSolver::updateDrift()
 {
     const auto& path = m_unit.supply;
-    m_previousSupply = std::move(m_supply);
-    m_supply.clear();
-    m_supply.reserve(path.size());
-
     // Temperature change of the sections after each one that the controls do not
-    // set (fans, humidifiers, fixed preheaters), from the previous pass: a coil
-    // aims at the setpoint less what the air gains after it.
-    std::vector<TemperatureDifference> drift(path.size(), TemperatureDifference{});
-    if (m_previousSupply.size() == path.size()) {
-        TemperatureDifference after{};
-        for (std::size_t k = path.size(); k-- > 0;) {
-            drift[k] = after;
-            if (!isTemperatureControlled(path[k]))
-                after += m_previousSupply[k].outlet.state.dryBulb() - m_previousSupply[k].inlet.state.dryBulb();
-        }
+    // set (fans, humidifiers, fixed preheaters), from the last pass: a coil aims at
+    // the setpoint less what the air gains after it.
+    TemperatureDifference after{};
+    for (std::size_t k = path.size(); k-- > 0;) {
+        m_drift[k] = after;
+        if (!m_supplyControlled[k] && m_supply[k].computed)
+            after += m_supply[k].outlet.state.dryBulb() - m_supply[k].inlet.state.dryBulb();
     }
+}
+
+bool CaseSolver::fansSettled(const std::vector<Section>& path, const std::vector<Slot>& slots,
+                             Pressure externalTotal) const
+{
+    Pressure internal{};
+    int fans = 0;
+    for (std::size_t j = 0; j < path.size(); ++j) {
+        if (isFan(path[j]))
+            ++fans;
+        else if (slots[j].computed)
+            internal += slots[j].pressureDrop;
+    }
+    if (fans == 0)
+        return true;
+    const Pressure each = (internal + externalTotal) / static_cast<double>(fans);
+    for (std::size_t j = 0; j < path.size(); ++j)
+        if (isFan(path[j]) && std::abs((slots[j].fanPressure - each).value()) > kFanPressureTolerance)
+            return false;
+    return true;
+}
+
+void CaseSolver::supplyPass(std::size_t from)
+{
+    const auto& path = m_unit.supply;
+    const auto& flows = m_unit.airflows;
 
     Sections::AirStream air{*m_outdoor, m_supplyInFlow.empty() ? m_supplyFlow : m_supplyInFlow.front()};
-    Pressure p = -m_unit.airflows.supplyExternalBefore;
+    Pressure p = -flows.supplyExternalBefore;
     bool dehumidifying = false; // a cooling coil upstream has cooled below the temperature target
+    if (from > 0) { // the sections before are as the last pass left them
+        air = m_supply[from - 1].outlet;
+        p = m_supply[from - 1].staticPressureOut;
+        for (std::size_t k = 0; k < from; ++k)
+            dehumidifying = dehumidifying || m_supply[k].cooledBelowTarget;
+    }
 
-    for (std::size_t k = 0; k < path.size(); ++k) {
+    for (std::size_t k = from; k < path.size(); ++k) {
         const auto& section = path[k];
+        Slot& slot = m_supply[k];
         air.dryAir = m_supplyInFlow[k];
-        auto ctx = contextFor(air, m_supplyFanPressure[k]);
-        ctx.pathDesignFlow = m_supplyDesignFlow;
-        const AbsoluteTemperature target = m_case.supplySetpoint - drift[k];
-        ctx.target.outletTemperature = target;
-        ctx.target.minHumidity = m_minHumidity;
-        ctx.target.maxHumidity = m_maxHumidity;
-        ctx.target.dehumidify = m_maxHumidity.has_value();
-        if (dehumidifying && isHeating(section) && !m_case.dehumidifyWithReheat)
-            ctx.target.outletTemperature.reset();
-        auto& findings = m_supplyFindings[k];
-        findings.clear();
+        const AbsoluteTemperature aim = m_case.supplySetpoint - m_drift[k];
+        const bool hasTarget = !(dehumidifying && isHeating(section) && !m_case.dehumidifyWithReheat);
+        const double key = hasTarget && usesTarget(section) ? aim.value() : std::numeric_limits<double>::quiet_NaN();
 
         if (const auto* mix = specAs<Sections::MixingBox>(section)) {
-            auto& c = coupling(section.id);
-            Sections::AirStream recirculated{c.extractInlet ? c.extractInlet->state : *m_room, c.recirculated};
-            Sections::MixingBox::Detail detail;
-            auto outcome = mix->mix(air, recirculated, ctx, detail);
-            findings = std::move(outcome.findings);
-            m_supply.push_back(makeResult(section, PathKind::Supply, air, outcome.outlet, p, outcome.pressureDrop,
-                                          ctx.faceVelocity, MassFlow{}, outcome.waterRemoved, detail));
+            auto& c = m_couplings[m_supplyCoupling[k]];
+            const Sections::AirStream recirculated{c.extractInlet ? c.extractInlet->state : *m_room, c.recirculated};
+            if (!(slot.computed && sameStream(slot.inlet, air) && sameStream(slot.recirculated, recirculated))) {
+                auto ctx = contextFor(air, Pressure{});
+                ctx.pathDesignFlow = m_supplyDesignFlow;
+                ctx.target.outletTemperature = aim;
+                ctx.target.minHumidity = m_minHumidity;
+                ctx.target.maxHumidity = m_maxHumidity;
+                ctx.target.dehumidify = m_maxHumidity.has_value();
+                Sections::MixingBox::Detail detail;
+                auto outcome = mix->mix(air, recirculated, ctx, detail);
+                slot.computed = true;
+                slot.inlet = air;
+                slot.recirculated = recirculated;
+                slot.outlet = outcome.outlet;
+                slot.pressureDrop = outcome.pressureDrop;
+                slot.waterRemoved = outcome.waterRemoved;
+                slot.faceVelocity = ctx.faceVelocity;
+                slot.detail = detail;
+                slot.findings = std::move(outcome.findings);
+                for (auto& f : slot.findings)
+                    if (f.sectionId.empty())
+                        f.sectionId = section.id;
+            }
+            slot.staticPressureIn = p;
+            slot.staticPressureOut = p - slot.pressureDrop;
         } else if (const auto* hr = specAs<Recovery::HeatRecovery>(section)) {
-            auto& c = coupling(section.id);
-            c.supplyInlet = air;
+            auto& c = m_couplings[m_supplyCoupling[k]];
             Recovery::HeatRecoveryInputs in;
             in.supplyIn = air;
             in.extractIn = c.extractInlet.value_or(Sections::AirStream{*m_room, m_extractInFlow[c.extractIndex]});
             if (hr->bypassControl)
-                in.supplyTarget = target;
-            c.recovery = c.evaluator->evaluate(in);
-            c.bypass = c.recovery->detail.bypassFraction;
-            c.rotorSpeed = c.recovery->rotorSpeedRatio;
-            const auto& out = *c.recovery;
-            findings = out.findings;
-            m_supply.push_back(makeResult(section, PathKind::Supply, air, out.supplyOut, p, out.supplyPressureDrop,
-                                          ctx.faceVelocity, MassFlow{}, MassFlow{}, out.detail));
+                in.supplyTarget = m_case.supplySetpoint - m_drift[k];
+            const auto& out = c.evaluator->evaluate(in, c.memory);
+            c.recovery = &out;
+            const Pressure pOut = p - out.supplyPressureDrop;
+            if (!slot.computed || !sameStream(slot.inlet, air))
+                slot.faceVelocity = volumeFlowOf(air) / m_sizing.crossSection;
+            slot.computed = true;
+            slot.inlet = air;
+            slot.outlet = out.supplyOut;
+            slot.pressureDrop = out.supplyPressureDrop;
+            slot.staticPressureIn = p;
+            slot.staticPressureOut = pOut;
         } else {
-            Sections::SectionOutcome outcome;
-            SectionDetail detail;
-            std::visit(
-                [&](const auto& spec) {
-                    using T = std::decay_t<decltype(spec)>;
-                    if constexpr (std::is_same_v<T, Sections::MixingBox> || std::is_same_v<T, Recovery::HeatRecovery>
-                                  || std::is_same_v<T, CoupledSide>) {
-                        throw Error("internal: unexpected section kind in the supply pass");
-                    } else {
-                        typename T::Detail d;
-                        outcome = spec.compute(air, ctx, d);
-                        if constexpr (std::is_same_v<T, Sections::CoolingCoil>) {
-                            if (outcome.outlet.state.dryBulb() < target - kelvinDifference(0.05))
-                                dehumidifying = true;
-                        }
-                        detail = d;
-                    }
-                },
-                section.spec);
-            findings = std::move(outcome.findings);
-            m_supply.push_back(makeResult(section, PathKind::Supply, air, outcome.outlet, p, outcome.pressureDrop,
-                                          ctx.faceVelocity, outcome.waterAdded, outcome.waterRemoved,
-                                          std::move(detail)));
-        }
-        tagFindings(findings, section.id);
-        air = m_supply.back().outlet;
-        p = m_supply.back().staticPressureOut;
-    }
-}
-
-void CaseSolver::updateFanPressures()
-{
-    const auto update = [](const std::vector<Section>& path, const std::vector<SectionResult>& results,
-                           Pressure externalTotal, std::vector<Pressure>& fanPressure) {
-        Pressure internal{};
-        int fans = 0;
-        for (std::size_t k = 0; k < path.size(); ++k) {
-            if (specAs<Sections::Fan>(path[k]))
-                ++fans;
-            else if (k < results.size())
-                internal += results[k].pressureDrop;
-        }
-        // Fans in series share the work equally.
-        const Pressure each = fans > 0 ? (internal + externalTotal) / static_cast<double>(fans) : Pressure{};
-        for (std::size_t k = 0; k < path.size(); ++k)
-            fanPressure[k] = specAs<Sections::Fan>(path[k]) ? each : Pressure{};
-    };
-    const auto& f = m_unit.airflows;
-    update(m_unit.supply, m_supply, f.supplyExternalBefore + f.supplyExternalAfter, m_supplyFanPressure);
-    update(m_unit.extract, m_extract, f.extractExternalBefore + f.extractExternalAfter, m_extractFanPressure);
-}
-
-double CaseSolver::largestChange(std::string& where) const
-{
-    double largest = 0.0;
-    const auto compare = [&](const std::vector<SectionResult>& now, const std::vector<SectionResult>& before) {
-        if (now.size() != before.size()) {
-            largest = 1e300;
-            return;
-        }
-        for (std::size_t k = 0; k < now.size(); ++k) {
-            const auto& a = now[k];
-            const auto& b = before[k];
-            // K; humidity ratio scaled so 1e-8 kg/kg counts as 1e-4; pressure so 0.01 Pa does.
-            const double change = std::max({std::abs((a.outlet.state.dryBulb() - b.outlet.state.dryBulb()).value()),
-                                            std::abs((a.outlet.state.humidityRatio() - b.outlet.state.humidityRatio()).value()) * 1e4,
-                                            std::abs((a.staticPressureOut - b.staticPressureOut).value()) * 1e-2});
-            if (!(change <= largest)) {
-                largest = std::isfinite(change) ? change : 1e300;
-                where = a.id;
+            const Pressure fan = isFan(section)
+                                     ? fanPressure(path, m_supply, k, air,
+                                                   flows.supplyExternalBefore + flows.supplyExternalAfter, true)
+                                     : Pressure{};
+            const bool unchanged = slot.computed && sameStream(slot.inlet, air) && slot.fanPressure == fan
+                                   && sameKey(slot.target, key)
+                                   && slot.dehumidify == m_maxHumidity.has_value();
+            if (unchanged) {
+                slot.staticPressureIn = p;
+                slot.staticPressureOut = p - slot.pressureDrop;
+            } else {
+                auto ctx = contextFor(air, fan);
+                ctx.pathDesignFlow = m_supplyDesignFlow;
+                ctx.target.minHumidity = m_minHumidity;
+                ctx.target.maxHumidity = m_maxHumidity;
+                if (hasTarget)
+                    ctx.target.outletTemperature = aim;
+                ctx.target.dehumidify = m_maxHumidity.has_value();
+                computeSection(section, slot, air, ctx, p);
             }
+            if (slot.cooledBelowTarget)
+                dehumidifying = true;
         }
-    };
-    compare(m_supply, m_previousSupply);
-    compare(m_extract, m_previousExtract);
-    return largest;
+        air = slot.outlet;
+        p = slot.staticPressureOut;
+    }
 }
 
 CaseResult CaseSolver::run()
 {
     CaseResult result;
     result.caseName = m_case.name;
+    const auto& flows = m_unit.airflows;
+    const Pressure supplyExternal = flows.supplyExternalBefore + flows.supplyExternalAfter;
+    const Pressure extractExternal = flows.extractExternalBefore + flows.extractExternalAfter;
     int iteration = 0;
     bool converged = false;
     std::string unsettled;
+    extractPass(true, 0);
+    std::vector<double> before(3 * (m_supply.size() + m_extract.size()));
     while (iteration < ChainSolver::kMaxIterations) {
         ++iteration;
-        extractPass();
-        supplyPass();
-        updateFanPressures();
-        if (iteration >= 2 && largestChange(unsettled) < kConvergence) {
+        snapshot(before);
+        updateDrift();
+        // A fan whose drops after it moved since it was computed is computed again
+        // (with the sections after it) in the same pass.
+        supplyPass(0);
+        for (int sweep = 1; sweep < kFanSweeps && !fansSettled(m_unit.supply, m_supply, supplyExternal); ++sweep)
+            supplyPass(firstFan(m_unit.supply));
+        extractPass(false, 0);
+        for (int sweep = 1; sweep < kFanSweeps && !fansSettled(m_unit.extract, m_extract, extractExternal); ++sweep)
+            extractPass(false, firstFan(m_unit.extract));
+        const std::string* where = nullptr;
+        const double change = largestChange(before, where);
+        if (iteration >= 2 && change < kConvergence) {
             converged = true;
             break;
         }
+        unsettled = where ? *where : std::string();
     }
     finish(result, iteration, converged, unsettled);
     return result;
+}
+
+void CaseSolver::snapshot(std::vector<double>& values) const
+{
+    std::size_t i = 0;
+    for (const auto* slots : {&m_supply, &m_extract}) {
+        for (const Slot& s : *slots) {
+            values[i++] = s.outlet.state.dryBulb().value();
+            values[i++] = s.outlet.state.humidityRatio().value();
+            values[i++] = s.staticPressureOut.value();
+        }
+    }
+}
+
+double CaseSolver::largestChange(const std::vector<double>& before, const std::string*& where) const
+{
+    double largest = 0.0;
+    std::size_t i = 0;
+    for (const auto* path : {&m_unit.supply, &m_unit.extract}) {
+        const auto& slots = path == &m_unit.supply ? m_supply : m_extract;
+        for (std::size_t k = 0; k < slots.size(); ++k, i += 3) {
+            const Slot& s = slots[k];
+            // K; humidity ratio scaled so 1e-8 kg/kg counts as 1e-4; pressure so 0.01 Pa does.
+            const double change = std::max({std::abs(s.outlet.state.dryBulb().value() - before[i]),
+                                            std::abs(s.outlet.state.humidityRatio().value() - before[i + 1]) * 1e4,
+                                            std::abs(s.staticPressureOut.value() - before[i + 2]) * 1e-2});
+            if (!(change <= largest)) {
+                largest = std::isfinite(change) ? change : 1e300;
+                where = &(*path)[k].id;
+            }
+        }
+    }
+    return largest;
 }
 
 void CaseSolver::finish(CaseResult& result, int iterations, bool converged, const std::string& unsettled)
 {
     result.iterations = iterations;
     result.converged = converged;
-    result.supply = m_supply;
-    result.extract = m_extract;
     auto& findings = result.findings;
     findings = m_caseFindings;
-    for (const auto& list : m_supplyFindings)
-        findings.insert(findings.end(), list.begin(), list.end());
-    for (const auto& list : m_extractFindings)
-        for (const auto& f : list)
-            if (std::find(findings.begin(), findings.end(), f) == findings.end())
-                findings.push_back(f);
+
+    result.supply.reserve(m_supply.size());
+    for (std::size_t k = 0; k < m_supply.size(); ++k) {
+        const Slot& s = m_supply[k];
+        const Section& section = m_unit.supply[k];
+        if (m_supplyCoupling[k] != kNone && m_couplings[m_supplyCoupling[k]].recovery) {
+            const auto& out = *m_couplings[m_supplyCoupling[k]].recovery;
+            result.supply.push_back(makeResult(section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
+                                               s.pressureDrop, s.faceVelocity, MassFlow{}, MassFlow{}, out.detail));
+            for (Finding f : out.findings) {
+                if (f.sectionId.empty())
+                    f.sectionId = section.id;
+                findings.push_back(std::move(f));
+            }
+        } else {
+            result.supply.push_back(makeResult(section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
+                                               s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved,
+                                               s.detail));
+            findings.insert(findings.end(), s.findings.begin(), s.findings.end());
+        }
+    }
+    result.extract.reserve(m_extract.size());
+    for (std::size_t k = 0; k < m_extract.size(); ++k) {
+        const Slot& s = m_extract[k];
+        const Section& section = m_unit.extract[k];
+        if (m_extractCoupling[k] != kNone) {
+            const Coupling& c = m_couplings[m_extractCoupling[k]];
+            const Section& supplySection = m_unit.supply[c.supplyIndex];
+            // An exchanger's findings are already there from the supply side.
+            result.extract.push_back(makeResult(supplySection, PathKind::Extract, s.inlet, s.outlet,
+                                                s.staticPressureIn, s.pressureDrop, s.faceVelocity, MassFlow{},
+                                                s.waterRemoved, c.recovery ? SectionDetail{c.recovery->detail}
+                                                                           : s.detail));
+        } else {
+            result.extract.push_back(makeResult(section, PathKind::Extract, s.inlet, s.outlet, s.staticPressureIn,
+                                                s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved,
+                                                s.detail));
+            for (const auto& f : s.findings)
+                if (std::find(findings.begin(), findings.end(), f) == findings.end())
+                    findings.push_back(f);
+        }
+    }
 
     if (!converged)
         findings.push_back({Severity::Error, "chain.not_converged", unsettled,

@@ -1,6 +1,21 @@
 #pragma once
 // Private to the chain: solves one design case of one unit. See ChainSolver.h for
 // the method; this class holds the per-case working state between passes.
+//
+// Every section keeps the inputs of its last computation (inlet stream, fan
+// pressure, control target) with the outcome. A pass recomputes a section only
+// when one of those inputs differs (sections are pure functions of them), so the
+// sections before the first control and whatever the controls leave unchanged
+// cost nothing after the first pass. Heat recovery keeps its own memory
+// (HeatRecoveryEvaluator::Memory) for the same purpose and for warm starts.
+//
+// Order of one iteration: supply, then extract, so the extract side of each
+// exchanger takes the outcome of the same iteration. Before the first iteration
+// the extract path is computed up to its first exchanger, which gives the supply
+// pass the extract air reaching the exchangers. Fans take the path's pressure
+// drops as known at the time: this pass's for the sections before them, the last
+// pass's for those after (in the first pass those are computed ahead once, with
+// the air at the fan's inlet).
 
 #include "airwright/core/chain/AirHandlingUnit.h"
 #include "airwright/core/chain/CaseResult.h"
@@ -22,20 +37,51 @@ private:
         std::string id;
         std::size_t supplyIndex = 0;
         std::size_t extractIndex = 0;
-        std::optional<Sections::AirStream> supplyInlet;
         std::optional<Sections::AirStream> extractInlet;
-        std::optional<Recovery::HeatRecoveryOutcome> recovery;
         std::optional<Recovery::HeatRecoveryEvaluator> evaluator;
-        std::optional<Ratio> bypass;
-        std::optional<Ratio> rotorSpeed;
+        Recovery::HeatRecoveryEvaluator::Memory memory;
+        const Recovery::HeatRecoveryOutcome* recovery = nullptr; // in memory, from the last supply pass
         MassFlow recirculated;
     };
 
+    // One section on one path: the inputs of its last computation and what came out.
+    struct Slot {
+        bool computed = false;
+        // Inputs.
+        Sections::AirStream inlet;
+        Sections::AirStream recirculated; // mixing boxes
+        Pressure fanPressure;
+        double target = 0.0; // kelvin, NaN when none (or ignored by the section)
+        bool dehumidify = false;
+        // Outcome (heat recovery keeps its detail and findings in the coupling).
+        Sections::AirStream outlet;
+        Pressure pressureDrop;
+        MassFlow waterAdded;
+        MassFlow waterRemoved;
+        Velocity faceVelocity;
+        SectionDetail detail;
+        std::vector<Finding> findings;
+        bool cooledBelowTarget = false; // cooling coils: dehumidifying
+        // Static pressures of the last pass.
+        Pressure staticPressureIn;
+        Pressure staticPressureOut;
+    };
+
     void computeFlows();
-    void extractPass();
-    void supplyPass();
-    void updateFanPressures();
-    double largestChange(std::string& where) const;
+    // A pass from section `from` on (the sections before it unchanged since the last).
+    void extractPass(bool untilFirstExchanger, std::size_t from);
+    void updateDrift();
+    void supplyPass(std::size_t from);
+    bool fansSettled(const std::vector<Section>& path, const std::vector<Slot>& slots, Pressure externalTotal) const;
+    // Outlet temperature, humidity ratio and static pressure of every section, in order.
+    void snapshot(std::vector<double>& values) const;
+    double largestChange(const std::vector<double>& before, const std::string*& where) const;
+    // Pressure the fan at index k of a path must deliver, from the drops known now.
+    Pressure fanPressure(const std::vector<Section>& path, std::vector<Slot>& slots, std::size_t k,
+                         const Sections::AirStream& air, Pressure externalTotal, bool supply);
+    // Computes a plain (uncoupled) section into its slot unless its inputs are unchanged.
+    void computeSection(const Section& section, Slot& slot, const Sections::AirStream& air,
+                        const Sections::SectionContext& ctx, Pressure pIn);
     void finish(CaseResult& result, int iterations, bool converged, const std::string& unsettled);
     Coupling& coupling(const std::string& id);
     Sections::SectionContext contextFor(const Sections::AirStream& inlet, Pressure fanPressure) const;
@@ -55,16 +101,14 @@ private:
 
     std::vector<MassFlow> m_supplyInFlow; // dry air entering each supply section
     std::vector<MassFlow> m_extractInFlow;
-    std::vector<Pressure> m_supplyFanPressure; // per section, fans only
-    std::vector<Pressure> m_extractFanPressure;
     std::vector<Coupling> m_couplings;
+    std::vector<std::size_t> m_supplyCoupling; // index into m_couplings, or npos
+    std::vector<std::size_t> m_extractCoupling;
+    std::vector<bool> m_supplyControlled; // temperature-controlled sections
 
-    std::vector<SectionResult> m_supply;
-    std::vector<SectionResult> m_extract;
-    std::vector<SectionResult> m_previousSupply;
-    std::vector<SectionResult> m_previousExtract;
-    std::vector<std::vector<Finding>> m_supplyFindings;
-    std::vector<std::vector<Finding>> m_extractFindings;
+    std::vector<Slot> m_supply;
+    std::vector<Slot> m_extract;
+    std::vector<TemperatureDifference> m_drift;
     std::vector<Finding> m_caseFindings;
 };
 

@@ -64,8 +64,10 @@ struct WarmOutcome {
     double b = 1.0;
 };
 
+// warmDewPoint: of the warm inlet, C (computed once per evaluation, shared with
+// the frost margin).
 template <class Rate>
-WarmOutcome coolWarmStream(const Side& warm, double tColdIn, Rate rate)
+WarmOutcome coolWarmStream(const Side& warm, double tColdIn, double warmDewPoint, Rate rate)
 {
     const double cw = warm.capacity();
     const double qDry = rate(1.0);
@@ -104,8 +106,7 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, Rate rate)
         lo = tDry;
         fLo = gDry;
         // A saturated inlet has its dew point at (or by rounding just above) t_in.
-        hi = std::min(raw::dewPointFromVapourPressure(raw::vapourPressureFromHumidityRatio(warm.w, warm.p)),
-                      warm.t);
+        hi = std::min(warmDewPoint, warm.t);
         fHi = qDry - cw * (warm.t - hi); // b = 1 at the dew point: no rate call needed
     }
     const double t = hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance).x;
@@ -209,7 +210,22 @@ double AirToAirExchanger::coilConductance(double dryAirFlow) const
     return m_ratedCoilConductance * std::pow(dryAirFlow / m_ratedMassFlow, m_htExponent);
 }
 
-ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& point) const
+// Everything of one evaluation except the outlet states and pressure drops, in
+// raw doubles, so that the control and frost solves can stop here.
+struct AirToAirExchanger::CoreOutcome {
+    double msTotal = 0.0, ms = 0.0, me = 0.0, beta = 0.0;
+    double supT = 0.0, supW = 0.0, supP = 0.0, supCp = 0.0;
+    double extT = 0.0, extW = 0.0, extP = 0.0;
+    double tsOut = 0.0, wsOut = 0.0, teOut = 0.0, weOut = 0.0;
+    double condS = 0.0, condE = 0.0, moisture = 0.0;
+    double surface = 0.0;
+    bool frost = false;
+    double margin = 1.0;
+    bool supplyClampNeeded = false, extractClampNeeded = false;
+    std::optional<RunAroundLoopState> loop;
+};
+
+AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingPoint& point) const
 {
     const ExchangerKind kind = m_rating.kind;
     const double maxFlow = kMaxFlowOverRated * m_ratedMassFlow;
@@ -230,19 +246,44 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
     const Side extIn = sideOf(point.extractInlet, me);
     const double ms = supIn.m;
 
+    CoreOutcome o;
+    o.msTotal = msTotal;
+    o.ms = ms;
+    o.me = me;
+    o.beta = beta;
+    o.supT = supIn.t;
+    o.supW = supIn.w;
+    o.supP = supIn.p;
+    o.supCp = supIn.cp;
+    o.extT = extIn.t;
+    o.extW = extIn.w;
+    o.extP = extIn.p;
+
     // Core outlet of each stream, raw.
     double tsOut = supIn.t, wsOut = supIn.w, teOut = extIn.t, weOut = extIn.w;
     double condS = 0.0, condE = 0.0, moisture = 0.0;
     double surface = std::min(supIn.t, extIn.t);
     bool frost = false;
-    std::optional<RunAroundLoopState> loop;
-    bool supplyClampNeeded = false, extractClampNeeded = false;
+    double margin = 1.0;
 
     const bool extractWarm = extIn.t > supIn.t;
     const Side& warm = extractWarm ? extIn : supIn;
     const Side& cold = extractWarm ? supIn : extIn;
     const double dT = warm.t - cold.t;
     const double cWarm = warm.capacity(), cCold = cold.capacity();
+    // Plates and loops: the warm stream's vapour pressure and dew point serve both
+    // the wet-surface solve and the frost margin.
+    double warmPw = 0.0, warmDew = 0.0;
+    if (!isRotary(kind) && ms > 0.0 && dT > 0.0) {
+        warmPw = raw::vapourPressureFromHumidityRatio(warm.w, warm.p);
+        if (warmPw > 0.0)
+            warmDew = raw::dewPointFromVapourPressure(warmPw);
+    }
+    // Kelvin of the coldest surface above min(0 C, dew/frost point of the warm stream).
+    const auto surfaceMargin = [&](double tSurface) {
+        const double limit = warmPw > 0.0 ? std::min(0.0, warmDew) : 0.0;
+        return tSurface - limit;
+    };
 
     if (kind == ExchangerKind::RunAroundCoil) {
         const double cf = m_loopCapacityRate;
@@ -257,7 +298,7 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
             };
             const double epsCminCold = coil(uaCold, cCold);
             auto rate = [&](double b) { return dT / (1.0 / coil(b * uaWarm, b * cWarm) + 1.0 / epsCminCold - 1.0 / cf); };
-            const WarmOutcome w = coolWarmStream(warm, cold.t, rate);
+            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDew, rate);
             q = w.q;
             tFluidIntoWarmCoil = warm.t - q / coil(w.b * uaWarm, w.b * cWarm);
             const double tColdOut = cold.t + q / cCold;
@@ -266,13 +307,14 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
             (extractWarm ? condE : condS) = w.condensate;
             (extractWarm ? tsOut : teOut) = tColdOut;
             surface = tFluidIntoWarmCoil;
-            frost = Kernels::surfaceFrosts(surface, raw::vapourPressureFromHumidityRatio(warm.w, warm.p));
+            frost = Kernels::surfaceFrosts(surface, warmPw);
+            margin = surfaceMargin(surface);
         }
         const double tFluidWarm = tFluidIntoWarmCoil + q / cf;
-        loop = RunAroundLoopState{kilogramsPerSecond(cf / cp),
-                                  celsius(extractWarm ? tFluidWarm : tFluidIntoWarmCoil),
-                                  celsius(extractWarm ? tFluidIntoWarmCoil : tFluidWarm),
-                                  watts(extractWarm ? q : -q), m_rating.pumpPower};
+        o.loop = RunAroundLoopState{kilogramsPerSecond(cf / cp),
+                                    celsius(extractWarm ? tFluidWarm : tFluidIntoWarmCoil),
+                                    celsius(extractWarm ? tFluidIntoWarmCoil : tFluidWarm),
+                                    watts(extractWarm ? q : -q), m_rating.pumpPower};
     } else if (isPlate(kind)) {
         if (ms > 0.0 && dT > 0.0) {
             const FlowArrangement arrangement = arrangementOf(kind);
@@ -285,7 +327,7 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
                                               kCrossCounterFlowPasses)
                        * cmin * dT;
             };
-            const WarmOutcome w = coolWarmStream(warm, cold.t, rate);
+            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDew, rate);
             (extractWarm ? teOut : tsOut) = w.tOut;
             (extractWarm ? weOut : wsOut) = w.wOut;
             (extractWarm ? condE : condS) = w.condensate;
@@ -297,7 +339,8 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
             surface = Kernels::coldCornerSurface(arrangement, cold.t, warm.t, w.tOut,
                                                  std::min(ua / cmin, kMaxNtu), cmin / cmax, cw <= cCold,
                                                  haCold / (haCold + haW));
-            frost = Kernels::surfaceFrosts(surface, raw::vapourPressureFromHumidityRatio(warm.w, warm.p));
+            frost = Kernels::surfaceFrosts(surface, warmPw);
+            margin = surfaceMargin(surface);
         }
     } else { // rotors
         if (ms > 0.0) {
@@ -329,41 +372,83 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
             // Energy by enthalpy bookkeeping: what the supply gains the extract loses.
             const double qTotal = ms * (raw::enthalpy(tsOut, wsOut) - raw::enthalpy(supIn.t, supIn.w));
             teOut = raw::dryBulbFromEnthalpy(raw::enthalpy(extIn.t, extIn.w) - qTotal / me, weOut);
-            supplyClampNeeded = wsOut > raw::satHumidityRatio(tsOut, supIn.p);
-            extractClampNeeded = weOut > raw::satHumidityRatio(teOut, extIn.p);
+            o.supplyClampNeeded = wsOut > raw::satHumidityRatio(tsOut, supIn.p);
+            o.extractClampNeeded = weOut > raw::satHumidityRatio(teOut, extIn.p);
             surface = cold.t;
             if (dT > 0.0 && cold.t < 0.0) {
                 const double wEff = warm.w - epsW * (warm.w - cold.w);
-                frost = Kernels::mixingLineSupersaturation(cold.t, cold.w, warm.t, wEff, cold.p) > 0.0;
+                const double excess = Kernels::mixingLineSupersaturation(cold.t, cold.w, warm.t, wEff, cold.p);
+                frost = excess > 0.0;
+                margin = -1000.0 * excess;
             }
         }
     }
+    o.tsOut = tsOut;
+    o.wsOut = wsOut;
+    o.teOut = teOut;
+    o.weOut = weOut;
+    o.condS = condS;
+    o.condE = condE;
+    o.moisture = moisture;
+    o.surface = surface;
+    o.frost = frost;
+    o.margin = margin;
+    return o;
+}
+
+AirToAirExchanger::ControlFigures AirToAirExchanger::controlFigures(const ExchangerOperatingPoint& point) const
+{
+    const CoreOutcome o = core(point);
+    double tSup = o.tsOut;
+    bool exact = !o.supplyClampNeeded;
+    if (o.ms <= 0.0) {
+        tSup = o.supT;
+    } else if (o.beta > 0.0) {
+        // Adiabatic mixing of core and bypass air, as Psychro::mix does it; a mix
+        // that would fog is left to the full evaluation (it clamps).
+        const double fa = o.ms / o.msTotal;
+        const double w = fa * o.wsOut + (1.0 - fa) * o.supW;
+        const double h = fa * raw::enthalpy(o.tsOut, o.wsOut) + (1.0 - fa) * raw::enthalpy(o.supT, o.supW);
+        tSup = std::clamp(raw::dryBulbFromEnthalpy(h, w), Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC);
+        if (o.wsOut != o.supW && w > raw::satHumidityRatio(tSup, o.supP))
+            exact = false;
+    }
+    if (!exact)
+        return {evaluate(point).supplyOutlet.dryBulb(), o.margin};
+    return {celsius(tSup), o.margin};
+}
+
+ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& point) const
+{
+    const ExchangerKind kind = m_rating.kind;
+    CoreOutcome o = core(point);
+    const double msTotal = o.msTotal, ms = o.ms, me = o.me;
 
     // Outlet states; a supersaturated rotor outlet is brought back to saturation.
     auto outlet = [](double t, double w, double p, bool clamp, double m, double& condensate) {
         if (!clamp)
             return stateOf(t, w, p);
-        const Psychro::ProcessOutcome o = Psychro::clampToSaturation(celsius(t), kilogramsPerKilogram(w), pascals(p));
-        condensate += m * toKilogramsPerKilogram(o.condensate);
-        return o.outlet;
+        const Psychro::ProcessOutcome r = Psychro::clampToSaturation(celsius(t), kilogramsPerKilogram(w), pascals(p));
+        condensate += m * toKilogramsPerKilogram(r.condensate);
+        return r.outlet;
     };
-    const Psychro::MoistAirState coreSupply = outlet(tsOut, wsOut, supIn.p, supplyClampNeeded, ms, condS);
-    const Psychro::MoistAirState extractOut = outlet(teOut, weOut, extIn.p, extractClampNeeded, me, condE);
+    const Psychro::MoistAirState coreSupply = outlet(o.tsOut, o.wsOut, o.supP, o.supplyClampNeeded, ms, o.condS);
+    const Psychro::MoistAirState extractOut = outlet(o.teOut, o.weOut, o.extP, o.extractClampNeeded, me, o.condE);
 
     Psychro::MoistAirState supplyOut = coreSupply;
     if (ms <= 0.0) {
         supplyOut = point.supplyInlet;
-    } else if (beta > 0.0) {
+    } else if (o.beta > 0.0) {
         const Psychro::ProcessOutcome mixed =
             Psychro::mix(coreSupply, kilogramsPerSecond(ms), point.supplyInlet, kilogramsPerSecond(msTotal - ms));
         supplyOut = mixed.outlet;
-        condS += msTotal * toKilogramsPerKilogram(mixed.condensate);
+        o.condS += msTotal * toKilogramsPerKilogram(mixed.condensate);
     }
 
     const double tSup = toCelsius(supplyOut.dryBulb());
     const double wSup = toKilogramsPerKilogram(supplyOut.humidityRatio());
-    const double dTin = extIn.t - supIn.t;
-    const double dWin = extIn.w - supIn.w;
+    const double dTin = o.extT - o.supT;
+    const double dWin = o.extW - o.supW;
     auto pressureDrop = [&](Pressure rated, double m, const Psychro::MoistAirState& in) {
         if (m <= 0.0)
             return pascals(0.0);
@@ -375,21 +460,25 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
     return ExchangerPerformance{
         supplyOut,
         extractOut,
-        watts(msTotal * supIn.cp * (tSup - supIn.t)),
-        watts(msTotal * (raw::enthalpy(tSup, wSup) - raw::enthalpy(supIn.t, supIn.w))),
-        fraction(dTin != 0.0 ? (tSup - supIn.t) / dTin : 0.0),
-        fraction(dWin != 0.0 ? (wSup - supIn.w) / dWin : 0.0),
-        kilogramsPerSecond(moisture),
-        kilogramsPerSecond(condS),
-        kilogramsPerSecond(condE),
-        pressureDrop(m_rating.ratedSupplyPressureDrop, ms, point.supplyInlet),
+        watts(msTotal * o.supCp * (tSup - o.supT)),
+        watts(msTotal * (raw::enthalpy(tSup, wSup) - raw::enthalpy(o.supT, o.supW))),
+        fraction(dTin != 0.0 ? (tSup - o.supT) / dTin : 0.0),
+        fraction(dWin != 0.0 ? (wSup - o.supW) / dWin : 0.0),
+        kilogramsPerSecond(o.moisture),
+        kilogramsPerSecond(o.condS),
+        kilogramsPerSecond(o.condE),
+        // The bypass damper is matched to the core, so the supply side loses the
+        // core's pressure drop at the full supply flow whatever the bypass share
+        // (common practice).
+        pressureDrop(m_rating.ratedSupplyPressureDrop, msTotal, point.supplyInlet),
         pressureDrop(m_rating.ratedExtractPressureDrop, me, point.extractInlet),
         kind == ExchangerKind::RunAroundCoil ? m_rating.pumpPower : watts(0.0),
-        celsius(surface),
-        frost,
+        celsius(o.surface),
+        o.frost,
+        o.margin,
         point.bypassFraction,
         point.rotorSpeedRatio,
-        loop,
+        o.loop,
     };
 }
 
@@ -406,36 +495,68 @@ Ratio AirToAirExchanger::thermalEfficiencyEu1253() const
 }
 
 SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const ExchangerOperatingPoint& point,
-                                                                  AbsoluteTemperature setpoint) const
+                                                                  AbsoluteTemperature setpoint,
+                                                                  const std::optional<ControlStart>& start) const
 {
     const bool rotor = isRotary(m_rating.kind);
     // Control value c: bypass fraction (1 = no recovery) or speed (0 = no recovery).
     const double none = rotor ? 0.0 : 1.0;
     const double full = rotor ? 1.0 : 0.0;
-    auto at = [&](double c) {
+    auto pointAt = [&](double c) {
         ExchangerOperatingPoint p = point;
         (rotor ? p.rotorSpeedRatio : p.bypassFraction) = fraction(c);
-        return evaluate(p);
+        return p;
     };
+    auto at = [&](double c) { return evaluate(pointAt(c)); };
+    // Only the supply outlet temperature matters inside the solve.
+    auto tOutAt = [&](double c) { return toCelsius(controlFigures(pointAt(c)).supplyOutlet); };
     const double tIn = toCelsius(point.supplyInlet.dryBulb());
     const double target = toCelsius(setpoint);
     checkRange("supply temperature setpoint", target, Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC, "C",
                "-100 .. 200 C");
-    ExchangerPerformance best = at(full);
-    const double tFull = toCelsius(best.supplyOutlet.dryBulb());
+    const double tFull = start && start->fullRecoveryOutlet ? toCelsius(*start->fullRecoveryOutlet) : tOutAt(full);
     const double reach = tFull - tIn;
     const double want = target - tIn;
     constexpr double tolerance = 1e-6; // K
+    constexpr double controlTolerance = 1e-9;
 
     if (reach * want <= 0.0 || std::abs(reach) < tolerance) {
         // Recovery would move away from the setpoint (or cannot move at all).
         return {fraction(none), std::abs(want) < tolerance, at(none)};
     }
     if (std::abs(want) >= std::abs(reach))
-        return {fraction(full), std::abs(want - reach) < tolerance, best};
+        return {fraction(full), std::abs(want - reach) < tolerance, at(full)};
 
-    auto f = [&](double c) { return toCelsius(at(c).supplyOutlet.dryBulb()) - target; };
-    const double c = findBracketedRoot(f, none, full, -want, reach - want, 1e-9).x;
+    auto f = [&](double c) { return tOutAt(c) - target; };
+    if (start) {
+        // Secant steps from the last control value (the first along the chord
+        // from no to full recovery), each aimed a little past the secant root so
+        // that the root is soon bracketed; then Brent on that bracket.
+        const double lower = std::min(none, full), upper = std::max(none, full);
+        double x0 = std::clamp(toFraction(start->control), lower, upper);
+        double f0 = f(x0);
+        if (f0 == 0.0)
+            return {fraction(x0), true, at(x0)};
+        double slope = reach / (full - none);
+        for (int step = 0; step < 4; ++step) {
+            const double secant = x0 - f0 / slope;
+            const double past = std::max(1e-3 * std::abs(secant - x0), 2.0 * controlTolerance);
+            const double x1 = std::clamp(secant + (secant > x0 ? past : -past), lower, upper);
+            if (x1 == x0)
+                break;
+            const double f1 = f(x1);
+            if ((f1 > 0.0) != (f0 > 0.0) || f1 == 0.0) {
+                const double c = findBracketedRoot(f, x0, x1, f0, f1, controlTolerance).x;
+                return {fraction(c), true, at(c)};
+            }
+            if (f1 == f0)
+                break;
+            slope = (f1 - f0) / (x1 - x0);
+            x0 = x1;
+            f0 = f1;
+        }
+    }
+    const double c = findBracketedRoot(f, none, full, -want, reach - want, controlTolerance).x;
     return {fraction(c), true, at(c)};
 }
 

@@ -40,6 +40,18 @@ inline double crossFlowCminMixed(double n, double cr)
     return -std::expm1(std::expm1(-cr * n) / cr);
 }
 
+// 1/k for k = 0 .. kReciprocalCount - 1 (entry 0 unused).
+inline constexpr int kReciprocalCount = 64;
+inline constexpr auto kReciprocals = [] {
+    struct Table {
+        double v[kReciprocalCount];
+        constexpr double operator[](int k) const { return v[k]; }
+    } t{};
+    for (int k = 1; k < kReciprocalCount; ++k)
+        t.v[k] = 1.0 / k;
+    return t;
+}();
+
 // Exact series for unmixed cross-flow (see EffectivenessNtu.h). P(k, x) is kept
 // as 1 - e^-x sum_{m<k} x^m/m!, reduced term by term from -expm1(-x): the
 // subtraction stays accurate to ~1e-16 absolute, which is what the sum needs.
@@ -66,8 +78,11 @@ inline double crossFlowBothUnmixed(double n, double cr)
     split(x, tX, pX);
     double sum = pN * pX;
     for (int k = 1; k < 2000; ++k) {
-        tN *= n / k;
-        tX *= x / k;
+        // 1/k from a table while it lasts: the loop runs about 10 to 30 times at
+        // usual NTU, and a multiplication is far cheaper than two divisions.
+        const double invK = k < kReciprocalCount ? kReciprocals[k] : 1.0 / k;
+        tN *= n * invK;
+        tX *= x * invK;
         pN -= tN;
         pX -= tX;
         if (pN <= 0.0 || pX <= 0.0)

@@ -3,6 +3,7 @@
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
 #include "airwright/core/psychro/AirProcesses.h"
+#include "airwright/core/recovery/BracketedRoot.h"
 #include "airwright/core/recovery/FrostOnset.h"
 
 #include <algorithm>
@@ -17,6 +18,28 @@ namespace {
 Ratio regulationMinimum(ExchangerKind kind)
 {
     return kind == ExchangerKind::RunAroundCoil ? percent(68.0) : percent(73.0);
+}
+
+// Control resolution of frost protection (bypass share, rotor speed, supply share).
+constexpr double kControlTolerance = 1e-4;
+// Smallest rotor speed or bypass remainder the protection considers: at exactly
+// zero flow through the core the exchanger has no surface temperature to speak of.
+constexpr double kLeastControl = 1e-3;
+constexpr double kLeastSupplyShare = 0.05;
+// Below this (K) full recovery counts as no recovery at all, as in
+// AirToAirExchanger::controlSupplyTemperature.
+constexpr double kReachTolerance = 1e-6;
+
+template <class Q> bool sameOptional(const std::optional<Q>& a, const std::optional<Q>& b)
+{
+    if (a.has_value() != b.has_value())
+        return false;
+    return !a.has_value() || a->value() == b->value();
+}
+
+bool sameStream(const Sections::AirStream& a, const Sections::AirStream& b)
+{
+    return a.state == b.state && a.dryAir.value() == b.dryAir.value();
 }
 
 Sections::AirStream mixStreams(const Sections::AirStream& a, const Sections::AirStream& b)
@@ -60,6 +83,43 @@ MassFlow HeatRecoveryEvaluator::supplyInletFlow(MassFlow supplyOutletFlow) const
 
 HeatRecoveryOutcome HeatRecoveryEvaluator::evaluate(const HeatRecoveryInputs& inputs) const
 {
+    return compute(inputs, nullptr);
+}
+
+const HeatRecoveryOutcome& HeatRecoveryEvaluator::evaluate(const HeatRecoveryInputs& inputs, Memory& memory) const
+{
+    if (memory.m_owner != this)
+        memory = Memory{};
+    memory.m_owner = this;
+    if (memory.m_inputs && memory.m_outcome) {
+        const HeatRecoveryInputs& last = *memory.m_inputs;
+        if (sameStream(last.supplyIn, inputs.supplyIn) && sameStream(last.extractIn, inputs.extractIn)
+            && sameOptional(last.fixedBypass, inputs.fixedBypass)
+            && sameOptional(last.fixedRotorSpeed, inputs.fixedRotorSpeed)) {
+            // The target only reaches the outcome through the control.
+            const bool controlled = !inputs.fixedBypass && !inputs.fixedRotorSpeed && m_spec.bypassControl;
+            bool same = !controlled || sameOptional(last.supplyTarget, inputs.supplyTarget);
+            if (!same && controlled && last.supplyTarget && inputs.supplyTarget && memory.m_fullReach) {
+                // Full recovery fell short before; if it still does, the control
+                // stays at full recovery (AirToAirExchanger::controlSupplyTemperature).
+                const double reach = *memory.m_fullReach;
+                const double want = toCelsius(*inputs.supplyTarget) - toCelsius(inputs.supplyIn.state.dryBulb());
+                same = reach * want > 0.0 && std::abs(reach) >= kReachTolerance && std::abs(want) >= std::abs(reach);
+            }
+            if (same) {
+                memory.m_inputs = inputs;
+                return *memory.m_outcome;
+            }
+        }
+    }
+    memory.m_outcome = compute(inputs, &memory);
+    memory.m_inputs = inputs;
+    ++memory.evaluations;
+    return *memory.m_outcome;
+}
+
+HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inputs, Memory* memory) const
+{
     HeatRecoveryOutcome out;
     const bool rotary = isRotary(m_spec.kind);
     const Sections::AirStream& supplyIn = inputs.supplyIn;
@@ -86,9 +146,40 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::evaluate(const HeatRecoveryInputs& in
         point.rotorSpeedRatio = inputs.fixedRotorSpeed.value_or(fraction(1.0));
         performance = evaluateAt(point);
     } else if (m_spec.bypassControl && inputs.supplyTarget) {
-        performance = m_exchanger.controlSupplyTemperature(point, *inputs.supplyTarget).performance;
+        std::optional<AirToAirExchanger::ControlStart> start;
+        if (memory && memory->m_control) {
+            start = AirToAirExchanger::ControlStart{*memory->m_control, {}};
+            // Full recovery gives the same outlet as long as the streams are the same.
+            if (memory->m_fullOutlet && memory->m_inputs && sameStream(memory->m_inputs->supplyIn, supplyIn)
+                && sameStream(memory->m_inputs->extractIn, extractIn))
+                start->fullRecoveryOutlet = memory->m_fullOutlet;
+        }
+        const auto control = m_exchanger.controlSupplyTemperature(point, *inputs.supplyTarget, start);
+        performance = control.performance;
         point.bypassFraction = performance.bypassFraction;
         point.rotorSpeedRatio = performance.rotorSpeedRatio;
+        if (memory) {
+            memory->m_control = control.control;
+            // Full recovery short of the target: the branch of the control that a
+            // new target leaves unchanged as long as it stays out of reach.
+            const double tIn = toCelsius(supplyIn.state.dryBulb());
+            const double reach = toCelsius(performance.supplyOutlet.dryBulb()) - tIn;
+            const double want = toCelsius(*inputs.supplyTarget) - tIn;
+            const double full = rotary ? 1.0 : 0.0;
+            memory->m_fullReach.reset();
+            if (start && start->fullRecoveryOutlet) {
+                memory->m_fullOutlet = start->fullRecoveryOutlet;
+            } else {
+                ExchangerOperatingPoint fullPoint = point;
+                (rotary ? fullPoint.rotorSpeedRatio : fullPoint.bypassFraction) = fraction(rotary ? 1.0 : 0.0);
+                memory->m_fullOutlet = control.control.value() == (rotary ? 1.0 : 0.0)
+                                           ? performance.supplyOutlet.dryBulb()
+                                           : m_exchanger.controlFigures(fullPoint).supplyOutlet;
+            }
+            if (control.control.value() == full && reach * want > 0.0 && std::abs(reach) >= kReachTolerance
+                && std::abs(want) >= std::abs(reach))
+                memory->m_fullReach = reach;
+        }
     } else {
         performance = evaluateAt(point);
     }
@@ -115,21 +206,27 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::evaluate(const HeatRecoveryInputs& in
             break;
         case FrostStrategy::Bypass:
         case FrostStrategy::RotorSpeed: {
-            // Least reduction of recovery that keeps the exchanger free of frost.
+            // Least reduction of recovery that keeps the exchanger free of frost: the
+            // root of the frost margin in the bypass share (or rotor speed).
             const bool bySpeed = m_spec.frostStrategy == FrostStrategy::RotorSpeed;
-            double lo = bySpeed ? 0.0 : point.bypassFraction.value();     // lo: frost-free side for speed
-            double hi = bySpeed ? point.rotorSpeedRatio.value() : 1.0;
-            for (int i = 0; i < 40 && hi - lo > 1e-4; ++i) {
-                const double mid = 0.5 * (lo + hi);
+            Ratio& control = bySpeed ? point.rotorSpeedRatio : point.bypassFraction;
+            const double frosting = control.value();
+            const double safe = bySpeed ? kLeastControl : 1.0 - kLeastControl;
+            const auto margin = [&](double x) {
                 auto trial = point;
-                (bySpeed ? trial.rotorSpeedRatio : trial.bypassFraction) = fraction(mid);
-                const bool frosts = evaluateAt(trial).frostRisk;
-                if (bySpeed)
-                    (frosts ? hi : lo) = mid;
-                else
-                    (frosts ? lo : hi) = mid;
+                (bySpeed ? trial.rotorSpeedRatio : trial.bypassFraction) = fraction(x);
+                return m_exchanger.controlFigures(trial).frostMargin;
+            };
+            const double safeMargin = margin(safe);
+            if (safeMargin < 0.0) {
+                control = fraction(bySpeed ? 0.0 : 1.0); // nothing short of stopping recovery helps
+            } else {
+                const auto root = findBracketedRoot(margin, frosting, safe, performance.frostMargin, safeMargin,
+                                                    kControlTolerance, 40);
+                // Step to the frost-free side of the root.
+                const double x = bySpeed ? root.x - kControlTolerance : root.x + kControlTolerance;
+                control = fraction(std::clamp(x, 0.0, 1.0));
             }
-            (bySpeed ? point.rotorSpeedRatio : point.bypassFraction) = fraction(bySpeed ? lo : hi);
             performance = evaluateAt(point);
             out.findings.push_back({Severity::Info, "frost.protected", "",
                                     std::string("frost protection ") + (bySpeed ? "by slowing the rotor " : "by bypass ")
@@ -162,13 +259,17 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::evaluate(const HeatRecoveryInputs& in
         case FrostStrategy::ReducedSupply: {
             // During defrost the supply is cut until the exhaust stays frost-free;
             // reported for the defrost periods, not applied to the design states.
-            double lo = 0.05;
-            double hi = 1.0;
-            for (int i = 0; i < 40 && hi - lo > 1e-4; ++i) {
-                const double mid = 0.5 * (lo + hi);
+            const auto margin = [&](double share) {
                 auto trial = point;
-                trial.supplyDryAirFlow = supplyCore * mid;
-                (evaluateAt(trial).frostRisk ? hi : lo) = mid;
+                trial.supplyDryAirFlow = supplyCore * share;
+                return m_exchanger.controlFigures(trial).frostMargin;
+            };
+            double lo = kLeastSupplyShare;
+            const double loMargin = margin(lo);
+            if (loMargin >= 0.0) {
+                const auto root = findBracketedRoot(margin, lo, 1.0, loMargin, performance.frostMargin,
+                                                    kControlTolerance, 40);
+                lo = std::max(kLeastSupplyShare, root.x - kControlTolerance);
             }
             out.findings.push_back({Severity::Warning, "frost.reduced_supply", "",
                                     "defrost by reducing the supply " + where + " to " + formatFixed(lo * 100.0, 0)

@@ -6,4 +6,10 @@ list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
     core/annual/RandomStreamTest.cpp
     core/annual/SyntheticClimateTest.cpp
     core/annual/DemoClimateTest.cpp
+    core/annual/OperatingScheduleTest.cpp
+    core/annual/SeasonalConditionsTest.cpp
+    core/annual/UnitHourModelTest.cpp
+    core/annual/AnnualSimulationTest.cpp
+    core/annual/OptionRankingTest.cpp
+    core/annual/HeatRecoveryComparisonTest.cpp
 )

@@ -1,2 +1,10 @@
 list(APPEND AIRWRIGHT_UI_TEST_SOURCES
+    ui/views/DemoProject.h
+    ui/views/DemoProject.cpp
+    ui/views/UnitSystemTest.cpp
+    ui/views/PsychroChartModelTest.cpp
+    ui/views/PressureProfileModelTest.cpp
+    ui/views/ScheduleModelTest.cpp
+    ui/views/FindingsModelTest.cpp
+    ui/views/ViewsTest.cpp
 )

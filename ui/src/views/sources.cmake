@@ -1,4 +1,22 @@
 list(APPEND AIRWRIGHT_UI_SOURCES
     include/airwright/ui/UnitSystem.h
     src/views/UnitSystem.cpp
+    include/airwright/ui/views/PlotStyle.h
+    src/views/PlotStyle.cpp
+    include/airwright/ui/views/PsychroChartModel.h
+    src/views/PsychroChartModel.cpp
+    include/airwright/ui/views/PsychroChartView.h
+    src/views/PsychroChartView.cpp
+    include/airwright/ui/views/PressureProfileModel.h
+    src/views/PressureProfileModel.cpp
+    include/airwright/ui/views/PressureProfileView.h
+    src/views/PressureProfileView.cpp
+    include/airwright/ui/views/ScheduleModel.h
+    src/views/ScheduleModel.cpp
+    include/airwright/ui/views/ScheduleView.h
+    src/views/ScheduleView.cpp
+    include/airwright/ui/views/FindingsModel.h
+    src/views/FindingsModel.cpp
+    include/airwright/ui/views/FindingsView.h
+    src/views/FindingsView.cpp
 )

@@ -5,6 +5,7 @@
 // edit the project directly.
 
 #include "airwright/core/chain/CaseResult.h"
+#include "airwright/core/project/LoadReport.h"
 #include "airwright/core/project/Project.h"
 
 #include <QObject>
@@ -37,6 +38,11 @@ public:
     void load(const QString& path);               // throws Core::Error with a message
     void save(const QString& path);               // atomic; throws Core::Error
     void reset(const Core::Project::Project& project, const QString& path = {});
+    // What the last load() had to say besides the project (ignored keys, migration).
+    const Core::Project::LoadReport& loadReport() const { return m_loadReport; }
+    // Marks the document as differing from its file without an undo command (a
+    // project restored from the crash-recovery file has never been saved).
+    void markModified();
 
     // Applied by undo commands only. Each replaces one part, recomputes and notifies.
     void setInfo(const Core::Project::ProjectInfo& info);
@@ -64,6 +70,7 @@ private:
     QString m_computeError;
     QString m_filePath;
     QString m_selected;
+    Core::Project::LoadReport m_loadReport;
     QUndoStack m_undo;
 };
 

@@ -59,17 +59,35 @@ public:
     // (rated) balanced flow, dry air, outdoor 5 C and extract 25 C (20 K).
     Ratio thermalEfficiencyEu1253() const;
 
+    // What the control and frost-protection solves need of an evaluation: the
+    // supply outlet temperature (after the bypass) and the frost margin, the same
+    // numbers as evaluate() gives, without building the outlet states.
+    struct ControlFigures {
+        AbsoluteTemperature supplyOutlet;
+        double frostMargin = 1.0;
+    };
+    ControlFigures controlFigures(const ExchangerOperatingPoint& point) const;
+
     // Bypass fraction (plates, loops) or rotor speed ratio (rotors) that brings
     // the supply outlet to the setpoint without overshooting it, by a bracketed
     // solve between zero and full recovery (the rest of the point unchanged).
-    SetpointControlResult controlSupplyTemperature(const ExchangerOperatingPoint& point,
-                                                   AbsoluteTemperature setpoint) const;
+    // A warm start (the chain's previous pass): where to start looking, and the
+    // supply outlet at full recovery if already known for this very point. It only
+    // saves evaluations: the result is the same root to the same tolerance.
+    struct ControlStart {
+        Ratio control;
+        std::optional<AbsoluteTemperature> fullRecoveryOutlet;
+    };
+    SetpointControlResult controlSupplyTemperature(const ExchangerOperatingPoint& point, AbsoluteTemperature setpoint,
+                                                   const std::optional<ControlStart>& start = std::nullopt) const;
 
     // Frost onset at the rated efficiencies (FrostOnset.h).
     std::optional<AbsoluteTemperature> frostOnsetOutdoorTemperature(const Psychro::MoistAirState& extract,
                                                                     Ratio outdoorRelativeHumidity) const;
 
 private:
+    struct CoreOutcome;
+    CoreOutcome core(const ExchangerOperatingPoint& point) const;
     double conductancePerSide(double dryAirFlow) const;
     double coilConductance(double dryAirFlow) const;
 

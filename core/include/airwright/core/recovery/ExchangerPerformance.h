@@ -29,6 +29,11 @@ struct ExchangerPerformance {
     // fluid; rotors: the cold inlet air) and the frost criterion of FrostOnset.h.
     AbsoluteTemperature coldestSurfaceTemperature;
     bool frostRisk = false;
+    // How far the point is from frosting, continuous so that protection can be
+    // solved for by a root finder; frostRisk == (frostMargin < 0). Plates and loops:
+    // kelvin of the coldest surface above min(0 C, dew/frost point of the warm
+    // stream); rotors: g/kg of the mixing line below saturation (1 when it cannot frost).
+    double frostMargin = 1.0;
     Ratio bypassFraction;
     Ratio rotorSpeedRatio;
     std::optional<RunAroundLoopState> loop; // run-around coil systems only

@@ -51,7 +51,31 @@ public:
     // designSupplyFlow stands in for the rated flow when the section gives none.
     HeatRecoveryEvaluator(const HeatRecovery& spec, VolumeFlow designSupplyFlow);
 
+    // What one caller lets the evaluator keep between calls (the chain, pass
+    // after pass): the last inputs with their outcome, and the control values
+    // found. Same inputs give the kept outcome back; so does a new supply target
+    // when full recovery fell short of the old one and falls short of the new one
+    // too (the control cannot change). Otherwise the outcome is computed afresh,
+    // its solves starting near the last control values. A Memory belongs to one
+    // evaluator; handed to another it starts empty.
+    class Memory {
+        friend class HeatRecoveryEvaluator;
+        const HeatRecoveryEvaluator* m_owner = nullptr;
+        std::optional<HeatRecoveryInputs> m_inputs;
+        std::optional<HeatRecoveryOutcome> m_outcome;
+        // Supply outlet minus inlet at full recovery, K, when the last control
+        // ran at full recovery because the target was out of reach.
+        std::optional<double> m_fullReach;
+        std::optional<Ratio> m_control; // bypass or rotor speed the control found
+        std::optional<AbsoluteTemperature> m_fullOutlet; // supply outlet at full recovery, for m_inputs' streams
+    public:
+        // Outcomes computed (not taken from memory), for tests and benchmarks.
+        int evaluations = 0;
+    };
+
     HeatRecoveryOutcome evaluate(const HeatRecoveryInputs& inputs) const;
+    // The same outcome as evaluate(inputs), kept in (and valid as long as) memory.
+    const HeatRecoveryOutcome& evaluate(const HeatRecoveryInputs& inputs, Memory& memory) const;
 
     // Supply-side dry-air flow entering the exchanger for a supply outlet flow.
     MassFlow supplyInletFlow(MassFlow supplyOutletFlow) const;
@@ -60,6 +84,8 @@ public:
     static ExchangerRating ratingFor(const HeatRecovery& spec, VolumeFlow designSupplyFlow);
 
 private:
+    HeatRecoveryOutcome compute(const HeatRecoveryInputs& inputs, Memory* memory) const;
+
     HeatRecovery m_spec;
     AirToAirExchanger m_exchanger;
     Ratio m_regulationEfficiency;

@@ -1,0 +1,10 @@
+#include "airwright/core/project/ProjectIssue.h"
+
+namespace Airwright::Core::Project {
+
+std::string ProjectIssue::text() const
+{
+    return path.empty() ? message : path + ": " + message;
+}
+
+} // namespace Airwright::Core::Project

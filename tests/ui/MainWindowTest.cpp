@@ -1,0 +1,152 @@
+// The window as a whole: first start opens the demo as an unsaved copy, the title
+// shows the file and the modified mark, the Edit commands act on the drawing's
+// selection, units and recent files are remembered, and every panel renders.
+
+#include "UiTestSupport.h"
+
+#include "airwright/ui/AppSettings.h"
+#include "airwright/ui/EditInfoCommand.h"
+#include "airwright/ui/MainWindow.h"
+#include "airwright/ui/ScreenshotWriter.h"
+#include "airwright/ui/SectionPaths.h"
+#include "airwright/ui/UnitDrawing.h"
+#include "airwright/ui/UnitSystem.h"
+
+#include <QFileInfo>
+#include <QImage>
+#include <QTemporaryDir>
+
+#include <set>
+
+namespace Airwright::Ui {
+namespace {
+
+using namespace Airwright::Core;
+using Chain::PathKind;
+
+class MainWindowTest : public ::testing::Test {
+protected:
+    void SetUp() override { ASSERT_TRUE(dir.isValid()); }
+
+    MainWindow::Options options()
+    {
+        MainWindow::Options o;
+        o.interactive = false;
+        o.autosave = false;
+        o.settingsFile = dir.filePath(QStringLiteral("settings.ini"));
+        o.recoveryDirectory = dir.filePath(QStringLiteral("recovery"));
+        return o;
+    }
+
+    QTemporaryDir dir;
+};
+
+TEST_F(MainWindowTest, FirstStartOpensDemoCopyThenNewProject)
+{
+    {
+        MainWindow window(options());
+        EXPECT_TRUE(window.startUp());
+        EXPECT_EQ(window.document()->project().info.reference, "DEMO-0001");
+        // A copy: saving must ask for a new name instead of overwriting the demo.
+        EXPECT_TRUE(window.document()->filePath().isEmpty());
+        EXPECT_TRUE(window.windowTitle().startsWith(QStringLiteral("Demo project")));
+    }
+    MainWindow second(options());
+    EXPECT_TRUE(second.startUp());
+    EXPECT_EQ(second.document()->project().info.name, "New unit");
+}
+
+TEST_F(MainWindowTest, TitleShowsFileAndModifiedMark)
+{
+    MainWindow window(options());
+    ASSERT_TRUE(window.openFile(ShellTest::demoPath()));
+    EXPECT_TRUE(window.windowTitle().contains(QStringLiteral("demo-library.awproj")));
+    EXPECT_FALSE(window.isWindowModified());
+    auto info = window.document()->project().info;
+    info.designer = "someone else";
+    window.document()->undoStack()->push(new EditInfoCommand(window.document(), info));
+    EXPECT_TRUE(window.isWindowModified());
+    window.document()->undoStack()->undo();
+    EXPECT_FALSE(window.isWindowModified());
+}
+
+TEST_F(MainWindowTest, OpeningABrokenFileKeepsTheProjectAndSaysWhy)
+{
+    MainWindow window(options());
+    ASSERT_TRUE(window.openFile(ShellTest::demoPath()));
+    const auto before = window.document()->project();
+    EXPECT_FALSE(window.openFile(dir.filePath(QStringLiteral("missing.awproj"))));
+    EXPECT_TRUE(window.lastError().contains(QStringLiteral("missing.awproj"))) << window.lastError().toStdString();
+    EXPECT_EQ(window.document()->project(), before);
+}
+
+TEST_F(MainWindowTest, EditCommandsActOnTheSelection)
+{
+    MainWindow window(options());
+    ASSERT_TRUE(window.openFile(ShellTest::demoPath()));
+    UnitDrawing* drawing = window.drawing();
+    drawing->selectPlace({PathKind::Supply, 1}); // oda-filter
+    const auto before = ShellTest::ids(window.document()->project().unit.supply);
+
+    window.moveSelected(+1);
+    auto supply = ShellTest::ids(window.document()->project().unit.supply);
+    EXPECT_EQ(supply[2], "oda-filter");
+    EXPECT_EQ(window.document()->selectedSection(), QStringLiteral("oda-filter"));
+
+    window.duplicateSelected();
+    supply = ShellTest::ids(window.document()->project().unit.supply);
+    EXPECT_EQ(supply[3], "oda-filter-2");
+
+    window.deleteSelected();
+    window.document()->selectSection(QStringLiteral("oda-filter"));
+    window.moveSelected(-1);
+    EXPECT_EQ(ShellTest::ids(window.document()->project().unit.supply), before);
+
+    // Adding from the palette goes after the selected section of that path.
+    drawing->selectPlace({PathKind::Extract, 0});
+    window.addSection(static_cast<int>(SectionCatalog::Entry::Silencer), static_cast<int>(PathKind::Extract));
+    EXPECT_EQ(window.document()->project().unit.extract[1].id, "silencer");
+    EXPECT_EQ(window.document()->selectedSection(), QStringLiteral("silencer"));
+    EXPECT_EQ(window.document()->undoStack()->count(), 5);
+}
+
+TEST_F(MainWindowTest, RemembersUnitsAndRecentFiles)
+{
+    {
+        MainWindow window(options());
+        ASSERT_TRUE(window.openFile(ShellTest::demoPath()));
+        window.setUnitSystemIp(true);
+        EXPECT_EQ(window.units()->system(), UnitSystem::System::IP);
+        window.close();
+    }
+    MainWindow again(options());
+    EXPECT_EQ(again.units()->system(), UnitSystem::System::IP);
+    const QStringList recent = again.settings()->recentFiles();
+    ASSERT_FALSE(recent.isEmpty());
+    EXPECT_EQ(recent.front(), QFileInfo(ShellTest::demoPath()).absoluteFilePath());
+}
+
+TEST_F(MainWindowTest, ScreenshotsOfEveryPanel)
+{
+    MainWindow window(options());
+    window.resize(1400, 900);
+    ASSERT_TRUE(window.openFile(ShellTest::demoPath()));
+    window.document()->selectSection(QStringLiteral("hr"));
+    QString error;
+    const QStringList files = ScreenshotWriter::write(window, dir.filePath(QStringLiteral("shots")), &error);
+    EXPECT_TRUE(error.isEmpty()) << error.toStdString();
+    EXPECT_EQ(static_cast<std::size_t>(files.size()), window.panels().size() + 2);
+    for (const QString& file : files) {
+        const QImage image(file);
+        ASSERT_FALSE(image.isNull()) << file.toStdString();
+        // Something is drawn: more than a background and a frame.
+        std::set<QRgb> colours;
+        for (int y = 0; y < image.height(); y += 3)
+            for (int x = 0; x < image.width(); x += 3)
+                colours.insert(image.pixel(x, y));
+        EXPECT_GT(colours.size(), 8u) << file.toStdString();
+    }
+}
+
+} // namespace
+} // namespace Airwright::Ui

@@ -1,0 +1,319 @@
+#include "airwright/ui/views/PsychroChartView.h"
+
+#include "airwright/ui/ProjectDocument.h"
+#include "airwright/ui/UnitSystem.h"
+#include "airwright/ui/views/PlotStyle.h"
+
+#include <QButtonGroup>
+#include <QEvent>
+#include <QHBoxLayout>
+#include <QLabel>
+#include <QToolButton>
+#include <QToolTip>
+#include <QVBoxLayout>
+
+#include <qcustomplot.h>
+
+#include <cmath>
+#include <limits>
+
+namespace Airwright::Ui {
+
+namespace {
+
+using Diagram = PsychroChartModel::Diagram;
+using LineRole = PsychroChartModel::LineRole;
+
+constexpr double kHitRadius = 9.0; // px
+
+// psi: lbf/in2 = 0.45359237 kg x 9.80665 m/s2 / (0.0254 m)^2 (NIST SP 811 B.8: 6894.757 Pa).
+constexpr double kPascalsPerPsi = 0.45359237 * 9.80665 / (0.0254 * 0.0254);
+
+QCPCurve* addCurve(QCustomPlot* plot, const QVector<QPointF>& points, const QPen& pen)
+{
+    auto* curve = new QCPCurve(plot->xAxis, plot->yAxis);
+    QVector<double> keys;
+    QVector<double> values;
+    keys.reserve(points.size());
+    values.reserve(points.size());
+    for (const QPointF& p : points) {
+        keys.push_back(p.x());
+        values.push_back(p.y());
+    }
+    curve->setData(keys, values);
+    curve->setPen(pen);
+    curve->setSelectable(QCP::stNone);
+    curve->removeFromLegend();
+    return curve;
+}
+
+QCPItemText* addLabel(QCustomPlot* plot, const QPointF& at, const QString& text, Qt::Alignment align,
+                      const QColor& colour, const QFont& font)
+{
+    auto* item = new QCPItemText(plot);
+    item->position->setType(QCPItemPosition::ptPlotCoords);
+    item->position->setCoords(at);
+    item->setPositionAlignment(align);
+    item->setText(text);
+    item->setColor(colour);
+    item->setFont(font);
+    item->setSelectable(false);
+    item->setClipToAxisRect(true);
+    return item;
+}
+
+} // namespace
+
+PsychroChartView::PsychroChartView(ProjectDocument* document, UnitSystem* units, QWidget* parent)
+    : QWidget(parent), m_document(document), m_units(units)
+{
+    auto* layout = new QVBoxLayout(this);
+    layout->setContentsMargins(0, 0, 0, 0);
+    layout->setSpacing(2);
+
+    auto* bar = new QHBoxLayout;
+    bar->setContentsMargins(4, 2, 4, 0);
+    m_chartButton = new QToolButton(this);
+    m_chartButton->setText(tr("t-W chart"));
+    m_chartButton->setToolTip(tr("Dry bulb across, humidity ratio up"));
+    m_mollierButton = new QToolButton(this);
+    m_mollierButton->setText(tr("h-x diagram"));
+    m_mollierButton->setToolTip(tr("Humidity ratio across, oblique enthalpy (Mollier form)"));
+    auto* group = new QButtonGroup(this);
+    for (QToolButton* b : {m_chartButton, m_mollierButton}) {
+        b->setCheckable(true);
+        b->setAutoRaise(true);
+        group->addButton(b);
+        bar->addWidget(b);
+    }
+    group->setExclusive(true);
+    m_chartButton->setChecked(true);
+    bar->addStretch(1);
+    m_pressureLabel = new QLabel(this);
+    bar->addWidget(m_pressureLabel);
+    layout->addLayout(bar);
+
+    m_plot = new QCustomPlot(this);
+    m_plot->setMinimumSize(320, 240);
+    m_plot->setMouseTracking(true);
+    layout->addWidget(m_plot, 1);
+
+    connect(m_chartButton, &QToolButton::toggled, this, [this](bool on) {
+        if (on)
+            setDiagram(Diagram::DryBulbHumidity);
+    });
+    connect(m_mollierButton, &QToolButton::toggled, this, [this](bool on) {
+        if (on)
+            setDiagram(Diagram::Mollier);
+    });
+    connect(m_document, &ProjectDocument::resultsChanged, this, &PsychroChartView::rebuild);
+    connect(m_document, &ProjectDocument::selectionChanged, this, &PsychroChartView::redraw);
+    connect(m_units, &UnitSystem::changed, this, &PsychroChartView::rebuild);
+    connect(m_plot, &QCustomPlot::mouseMove, this, &PsychroChartView::onMouseMove);
+    connect(m_plot, &QCustomPlot::mousePress, this, &PsychroChartView::onMousePress);
+    rebuild();
+}
+
+void PsychroChartView::setDiagram(Diagram diagram)
+{
+    if (diagram == m_diagram)
+        return;
+    m_diagram = diagram;
+    (diagram == Diagram::Mollier ? m_mollierButton : m_chartButton)->setChecked(true);
+    rebuild();
+}
+
+void PsychroChartView::changeEvent(QEvent* event)
+{
+    QWidget::changeEvent(event);
+    if (event->type() == QEvent::PaletteChange || event->type() == QEvent::FontChange)
+        redraw();
+}
+
+void PsychroChartView::rebuild()
+{
+    m_model.rebuild(m_document->project(), m_document->result(), *m_units, m_diagram);
+    const double p = m_model.pressurePa();
+    m_pressureLabel->setText(m_units->system() == UnitSystem::System::IP
+                                 ? tr("site pressure %1 psia").arg(QString::number(p / kPascalsPerPsi, 'f', 2))
+                                 : tr("site pressure %1 kPa").arg(QString::number(p / 1000.0, 'f', 1)));
+    redraw();
+}
+
+void PsychroChartView::redraw()
+{
+    m_plot->clearPlottables();
+    m_plot->clearItems();
+    const QPalette pal = palette();
+    PlotStyle::apply(*m_plot, pal);
+    const QColor base = pal.color(QPalette::Base);
+    const QColor text = pal.color(QPalette::Text);
+    const QColor lineColour = PlotStyle::lineColour(pal);
+    const QColor labelColour = PlotStyle::labelColour(pal);
+    QFont small = font();
+    small.setPointSizeF(std::max(6.5, font().pointSizeF() * 0.8));
+
+    const auto& f = m_model.frame();
+    const bool tw = m_model.diagram() == Diagram::DryBulbHumidity;
+    m_plot->xAxis->setRange(f.xMin, f.xMax);
+    m_plot->yAxis->setRange(f.yMin, f.yMax);
+    m_plot->xAxis->setLabel(m_model.xLabel());
+    m_plot->yAxis->setLabel(m_model.yLabel());
+    m_plot->xAxis2->setVisible(true);
+    m_plot->yAxis2->setVisible(true);
+    m_plot->xAxis2->setTickLabels(false);
+    m_plot->yAxis2->setTickLabels(false);
+    m_plot->xAxis2->setRange(f.xMin, f.xMax);
+    m_plot->yAxis2->setRange(f.yMin, f.yMax);
+    for (QCPAxis* axis : m_plot->axisRect()->axes()) {
+        axis->grid()->setVisible(false); // the reference lines are the grid
+        axis->setLabelFont(font());
+        axis->setTickLabelFont(small);
+    }
+
+    // Reference lines.
+    for (const auto& line : m_model.lines()) {
+        QPen pen(lineColour, 1.0);
+        Qt::Alignment align = Qt::AlignCenter;
+        bool withBackground = false;
+        QString label = line.label;
+        switch (line.role) {
+        case LineRole::Saturation:
+            pen = QPen(text, 1.8);
+            label = QStringLiteral("100 %");
+            withBackground = true;
+            break;
+        case LineRole::RelativeHumidity:
+            withBackground = true;
+            break;
+        case LineRole::Enthalpy:
+            pen.setStyle(Qt::DashLine);
+            // t-W: beside the saturation curve, in the empty space above it; h-x:
+            // at the dry-air end on the left.
+            align = tw ? (Qt::AlignRight | Qt::AlignBottom) : (Qt::AlignLeft | Qt::AlignBottom);
+            break;
+        case LineRole::WetBulb:
+            pen.setStyle(Qt::DotLine);
+            align = Qt::AlignLeft | Qt::AlignTop;
+            label.clear(); // read against the dry-bulb scale where it meets saturation
+            break;
+        case LineRole::Isotherm:
+            label.clear(); // the temperature axis names them
+            break;
+        }
+        addCurve(m_plot, line.points, pen);
+        if (!label.isEmpty()) {
+            auto* item = addLabel(m_plot, line.labelAt, label, align, labelColour, small);
+            if (withBackground) {
+                item->setBrush(base);
+                item->setPadding(QMargins(1, 0, 1, 0));
+            } else {
+                item->setPadding(QMargins(2, 0, 2, 1));
+            }
+        }
+    }
+
+    // The selected section, underneath the processes.
+    const QString selected = m_document->selectedSection();
+    QColor halo = pal.color(QPalette::Highlight);
+    halo.setAlphaF(0.45f);
+    for (const auto& [a, b] : m_model.segmentsOf(selected)) {
+        auto* c = addCurve(m_plot, {a, b}, QPen(halo, 9.0, Qt::SolidLine, Qt::RoundCap));
+        c->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, halo, halo, 14));
+    }
+
+    // Processes: supply solid and in the legend, extract dashed and lighter.
+    const auto& processes = m_model.processes();
+    for (int i = 0; i < int(processes.size()); ++i) {
+        const auto& process = processes[i];
+        const QColor colour = PlotStyle::caseColour(i);
+        const QColor light = PlotStyle::mix(colour, base, 0.3);
+        QVector<QPointF> extract;
+        for (const auto& p : process.extract)
+            extract.push_back(p.position);
+        auto* e = addCurve(m_plot, extract, QPen(light, 1.6, Qt::DashLine));
+        e->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(light, 1.4), base, 6));
+        QVector<QPointF> supply;
+        for (const auto& p : process.supply)
+            supply.push_back(p.position);
+        auto* s = addCurve(m_plot, supply, QPen(colour, 2.2));
+        s->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(colour, 1.8), base, 7));
+        s->setName(process.caseName);
+        s->addToLegend();
+    }
+    if (!processes.isEmpty()) {
+        // A legend key for the line style of the extract path.
+        auto* key = addCurve(m_plot, {}, QPen(labelColour, 1.6, Qt::DashLine));
+        key->setName(tr("extract air (dashed)"));
+        key->addToLegend();
+    }
+    m_plot->legend->setVisible(!processes.isEmpty());
+    m_plot->legend->setFont(small);
+    m_plot->axisRect()->insetLayout()->setInsetAlignment(
+        0, tw ? (Qt::AlignTop | Qt::AlignLeft) : (Qt::AlignBottom | Qt::AlignRight));
+
+    if (!m_document->result()) {
+        const QString why = m_document->computeError();
+        auto* item = new QCPItemText(m_plot);
+        item->position->setType(QCPItemPosition::ptAxisRectRatio);
+        item->position->setCoords(0.5, 0.5);
+        item->setText(why.isEmpty() ? tr("No results yet") : tr("No results: %1").arg(why));
+        item->setColor(text);
+        item->setBrush(base);
+        item->setPen(QPen(lineColour));
+        item->setPadding(QMargins(6, 4, 6, 4));
+    }
+    m_plot->replot();
+}
+
+PsychroChartView::Hit PsychroChartView::hitAt(const QPointF& pixel) const
+{
+    Hit best;
+    double bestDistance = kHitRadius;
+    const auto& processes = m_model.processes();
+    for (int i = 0; i < int(processes.size()); ++i)
+        for (bool extract : {false, true}) {
+            const auto& points = extract ? processes[i].extract : processes[i].supply;
+            for (int k = 0; k < int(points.size()); ++k) {
+                const QPointF p(m_plot->xAxis->coordToPixel(points[k].position.x()),
+                                m_plot->yAxis->coordToPixel(points[k].position.y()));
+                const double d = std::hypot(p.x() - pixel.x(), p.y() - pixel.y());
+                // Supply before extract on a tie: it is drawn on top.
+                if (d < bestDistance) {
+                    bestDistance = d;
+                    best = {i, extract, k};
+                }
+            }
+        }
+    return best;
+}
+
+QString PsychroChartView::tipAt(const QPoint& plotPixel) const
+{
+    const Hit hit = hitAt(plotPixel);
+    if (hit.process < 0)
+        return {};
+    const auto& process = m_model.processes()[hit.process];
+    const auto& point = (hit.extract ? process.extract : process.supply)[hit.point];
+    return m_model.describe(process, point, *m_units);
+}
+
+void PsychroChartView::onMouseMove(QMouseEvent* event)
+{
+    const QString tip = tipAt(event->position().toPoint());
+    if (tip.isEmpty())
+        QToolTip::hideText();
+    else
+        QToolTip::showText(event->globalPosition().toPoint(), tip, m_plot);
+}
+
+void PsychroChartView::onMousePress(QMouseEvent* event)
+{
+    const Hit hit = hitAt(event->position());
+    if (hit.process < 0)
+        return;
+    const auto& process = m_model.processes()[hit.process];
+    m_document->selectSection((hit.extract ? process.extract : process.supply)[hit.point].sectionId);
+}
+
+} // namespace Airwright::Ui
