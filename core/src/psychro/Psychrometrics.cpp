@@ -5,9 +5,12 @@
 #include "airwright/core/psychro/PsychroRaw.h"
 
 #include <algorithm>
+#include <array>
 #include <bit>
 #include <cmath>
+#include <cstddef>
 #include <cstdint>
+#include <limits>
 #include <string>
 
 namespace Airwright::Core::Psychro {
@@ -66,8 +69,9 @@ const double kMaxSatPressure = std::exp(lnPws(kSat[1], 200.0 + kKelvinOffset));
 
 inline int inverseBranch(double lnPw) { return lnPw > kLnPwsTriplePoint ? 1 : 0; }
 
-// Fitted dew point, K (Estrin evaluation to keep the dependency chain short).
-inline double fittedDewPointKelvin(double lnPw, int branch)
+// Fitted 1/T of the dew point, 1/K (Estrin evaluation to keep the dependency chain
+// short).
+inline double fittedInverseDewPoint(double lnPw, int branch)
 {
     const InverseFit& f = kInverse[branch];
     const double s = (lnPw - f.mid) / f.half;
@@ -75,110 +79,423 @@ inline double fittedDewPointKelvin(double lnPw, int branch)
     const double s4 = s2 * s2;
     const double p01 = f.c[0] + f.c[1] * s, p23 = f.c[2] + f.c[3] * s;
     const double p45 = f.c[4] + f.c[5] * s, p67 = f.c[6] + f.c[7] * s;
-    return 1.0 / ((p01 + p23 * s2) + (p45 + p67 * s2) * s4);
+    return (p01 + p23 * s2) + (p45 + p67 * s2) * s4;
 }
 
-// ln x to about 4e-8 absolute, for first guesses only (half the latency of
-// std::log): x = 2^k z with z in [sqrt(1/2), sqrt(2)), ln z by a degree-8
-// Chebyshev fit. Precondition: x positive and normal.
-inline double approxLog(double x)
+// 2^(j/64), j = 0 .. 63, to long-double accuracy at compile time (Taylor series of
+// e^(j ln 2 / 64)), then rounded to double.
+constexpr std::array<double, 64> exp2Table()
 {
-    constexpr std::uint64_t kOffset = 0x3fe6a09e667f3bcdULL; // bits of sqrt(1/2)
-    const std::uint64_t ix = std::bit_cast<std::uint64_t>(x);
-    const std::uint64_t tmp = ix - kOffset;
-    const auto k = static_cast<double>(static_cast<std::int64_t>(tmp) >> 52);
-    const double z = std::bit_cast<double>(ix - (tmp & (0xfffULL << 52)));
-    const double s = (z - 1.0606601717798214) * 2.8284271247461898;
-    const double s2 = s * s;
-    const double s4 = s2 * s2;
-    const double p01 = 0.058891517828191749 + 0.33333308777168585 * s;
-    const double p23 = -0.05555548159697412 + 0.012348930681128979 * s;
-    const double p45 = -0.0030873989768730086 + 0.000811556003221556 * s;
-    const double p67 = -0.00022516488892164606 + 7.9985779313279044e-05 * s;
-    const double poly = (p01 + p23 * s2) + (p45 + p67 * s2) * s4 - 2.3463300990221745e-05 * s4 * s4;
-    return k * 0.69314718055994531 + poly;
+    std::array<double, 64> table{};
+    for (int j = 0; j < 64; ++j) {
+        const long double y = static_cast<long double>(j) * 0.693147180559945309417232121458176568L / 64.0L;
+        long double term = 1.0L;
+        long double sum = 1.0L;
+        for (int n = 1; n < 30; ++n) {
+            term *= y / static_cast<long double>(n);
+            sum += term;
+        }
+        table[static_cast<std::size_t>(j)] = static_cast<double>(sum);
+    }
+    return table;
+}
+constexpr std::array<double, 64> kExp2Table = exp2Table();
+
+// e^x to within 1.3 ulp for -700 < x < 700 (checked against long double over -12 .. 16),
+// inline so that the hot loops pay no call: x = (64 k + j) ln 2 / 64 + r,
+// |r| <= ln 2 / 128, e^r by its Taylor polynomial of degree 5 (error 3e-17).
+inline double preciseExp(double x)
+{
+    constexpr double kShift = 6755399441055744.0;         // 1.5 * 2^52: adding it rounds to an integer
+    constexpr double kInvStep = 92.332482616893656;       // 64 / ln 2
+    constexpr double kStepHi = 0.010830424689629581;      // ln 2 / 64, 31 significant bits: k kStepHi is exact
+    constexpr double kStepLo = 6.6195646342560432e-12;    // the rest of ln 2 / 64
+    const double kd = x * kInvStep + kShift;
+    const std::uint64_t ki = std::bit_cast<std::uint64_t>(kd);
+    const double k = kd - kShift;
+    const double r = (x - k * kStepHi) - k * kStepLo;
+    const double r2 = r * r;
+    const double p = r + r2 * ((0.5 + r * (1.0 / 6.0)) + r2 * ((1.0 / 24.0) + r * (1.0 / 120.0)));
+    const double scale = std::bit_cast<double>(std::bit_cast<std::uint64_t>(kExp2Table[ki & 63U]) + ((ki >> 6) << 52));
+    return scale + scale * p;
 }
 
-// The psychrometer relation of eq. 33 / eq. 35 multiplied out:
-//   g(u) = (A - alpha u) Ws(u) - 1.006 (t - u) - W (A + 1.86 t - beta u),
-// increasing in u, zero at the wet bulb. Index 0: eq. 35 (A 2830, alpha 0.24,
-// beta 2.1); index 1: eq. 33 (A 2501, alpha 2.326, beta 4.186).
+// ln x for positive normal x to within 2e-15 absolute (checked against long double
+// over 1e-3 .. 3e6), inline: x = 2^k m, m in [1, 2); with c the centre of m's
+// 1/128 interval, ln x = k ln 2 + ln c + ln(1 + r), r = m / c - 1, |r| < 1/256,
+// ln(1 + r) by its Taylor polynomial of degree 6 (error 2e-18). The table holds
+// 1/c rounded and -ln of that, to long-double accuracy at compile time.
+struct LogTableEntry {
+    double inv, lnc;
+};
+constexpr std::array<LogTableEntry, 128> logTable()
+{
+    std::array<LogTableEntry, 128> table{};
+    for (int j = 0; j < 128; ++j) {
+        const double inv = 1.0 / (1.0 + (j + 0.5) / 128.0);
+        const long double y = 1.0L / static_cast<long double>(inv);
+        const long double z = (y - 1.0L) / (y + 1.0L); // ln y = 2 atanh z, z < 1/3
+        const long double z2 = z * z;
+        long double term = z;
+        long double sum = 0.0L;
+        for (int n = 0; n < 40; ++n) {
+            sum += term / static_cast<long double>(2 * n + 1);
+            term *= z2;
+        }
+        table[static_cast<std::size_t>(j)] = {inv, static_cast<double>(2.0L * sum)};
+    }
+    return table;
+}
+constexpr std::array<LogTableEntry, 128> kLogTable = logTable();
+
+inline double preciseLog(double x)
+{
+    constexpr double kLn2Hi = 0.69314718055989033;    // 42 significant bits: k kLn2Hi is exact
+    constexpr double kLn2Lo = 5.4979241645436439e-14; // the rest of ln 2
+    const std::uint64_t ix = std::bit_cast<std::uint64_t>(x);
+    const auto k = static_cast<double>(static_cast<std::int64_t>(ix >> 52) - 1023);
+    const LogTableEntry& e = kLogTable[(ix >> 45) & 127U];
+    const double m = std::bit_cast<double>((ix & 0x000fffffffffffffULL) | 0x3ff0000000000000ULL);
+    const double r = m * e.inv - 1.0;
+    const double r2 = r * r;
+    const double p = r2 * ((-0.5 + r * (1.0 / 3.0)) + r2 * ((-0.25 + r * 0.2) + r2 * (-1.0 / 6.0)));
+    return (k * kLn2Hi + e.lnc) + (r + (p + k * kLn2Lo));
+}
+
+// Derivatives of ln pws (eq. 5 / 6) with respect to temperature, from T and r = 1/T,
+// with the coefficients multiplied out once per branch.
+struct LnPwsDerivatives {
+    double d1, d2, d3, d4;
+};
+struct DerivativeCoefficients {
+    double a1, b0, b1, b2, b3; // d1 = a1 r^2 + b0 + T (b1 + T (b2 + T b3)) + kln r
+    double a2, e0, e1, e2, m2; // d2 = a2 r^3 + e0 + T (e1 + T e2) + m2 r^2
+    double a3, g0, g1, m3;     // d3 = a3 r^4 + g0 + T g1 + m3 r^3
+    double a4, h0, m4;         // d4 = a4 r^5 + h0 + m4 r^4
+    double kln;
+};
+constexpr DerivativeCoefficients derivativeCoefficients(const SatCoefficients& c)
+{
+    return {-c.k1,       c.c1,        2.0 * c.c2,   3.0 * c.c3,  4.0 * c.c4, 2.0 * c.k1,  2.0 * c.c2,
+            6.0 * c.c3,  12.0 * c.c4, -c.kln,       -6.0 * c.k1, 6.0 * c.c3, 24.0 * c.c4, 2.0 * c.kln,
+            24.0 * c.k1, 24.0 * c.c4, -6.0 * c.kln, c.kln};
+}
+constexpr DerivativeCoefficients kDerivative[2] = {derivativeCoefficients(kSat[0]), derivativeCoefficients(kSat[1])};
+
+inline LnPwsDerivatives lnPwsDerivatives(const DerivativeCoefficients& c, double T, double r)
+{
+    const double r2 = r * r;
+    const double r3 = r2 * r;
+    const double r4 = r2 * r2;
+    return {c.a1 * r2 + c.b0 + T * (c.b1 + T * (c.b2 + T * c.b3)) + c.kln * r,
+            c.a2 * r3 + c.e0 + T * (c.e1 + T * c.e2) + c.m2 * r2, c.a3 * r4 + c.g0 + T * c.g1 + c.m3 * r3,
+            c.a4 * r4 * r + c.h0 + c.m4 * r4};
+}
+
+// The psychrometer relation of eq. 33 / eq. 35 multiplied out by (p - pws(u)) / 0.621945:
+//   f(u) = pws(u) c(u) - p Q(u),
+//   Q(u) = (W (A + 1.86 t - beta u) + 1.006 (t - u)) / 0.621945,  c(u) = A - alpha u + Q(u),
+// increasing in u, zero at the wet bulb; c and Q are linear in u, so every derivative
+// of f comes from those of ln pws. Index 0: eq. 35 (A 2830, alpha 0.24, beta 2.1);
+// index 1: eq. 33 (A 2501, alpha 2.326, beta 4.186).
 struct WetBulbBranch {
     double A, alpha, beta;
 };
 constexpr WetBulbBranch kWetBulbBranch[2] = {{2830.0, 0.24, 2.1}, {2501.0, 2.326, 4.186}};
 
-inline double psychrometerResidual(const WetBulbBranch& b, double t, double w, double p, double u)
-{
-    const double ws = satHumidityRatio(u, p);
-    return (b.A - b.alpha * u) * ws - 1.006 * (t - u) - w * (b.A + 1.86 * t - b.beta * u);
-}
-
-// One Halley step on g at u, with g itself returned for bracketing.
-struct HalleyStep {
-    double g, step;
+// The moisture as the caller has it, as a pair (m, s) with f scaled by s > 0: the
+// humidity ratio (W, 1), or the vapour pressure as x = pw / p, (0.621945 x, 1 - x),
+// since W (1 - x) = 0.621945 x. The second form needs no division.
+struct Moisture {
+    double m, s;
 };
-inline HalleyStep halleyStep(const WetBulbBranch& b, double t, double w, double p, double u)
+inline Moisture moistureFromHumidityRatio(double w) { return {w, 1.0}; }
+inline Moisture moistureFromVapourFraction(double x) { return {kMolarMassRatio * x, 1.0 - x}; }
+
+// f (scaled by s) on one branch: Q(u) = q0 - k u, c(u) = c0 - kc u.
+struct WetBulbRelation {
+    const SatCoefficients* sat;
+    const DerivativeCoefficients* derivative;
+    double p, q0, k, c0, kc;
+};
+inline WetBulbRelation wetBulbRelation(int branch, double t, Moisture m, double p)
 {
-    const SatCoefficients& c = satBranch(u);
-    const double T = u + kKelvinOffset;
-    const double r = 1.0 / T;
-    const double L = c.k1 * r + c.k0 + T * (c.c1 + T * (c.c2 + T * (c.c3 + T * c.c4))) + c.kln * std::log(T);
-    const double L1 = -c.k1 * r * r + c.c1 + T * (2.0 * c.c2 + T * (3.0 * c.c3 + T * 4.0 * c.c4)) + c.kln * r;
-    const double L2 = 2.0 * c.k1 * r * r * r + 2.0 * c.c2 + T * (6.0 * c.c3 + T * 12.0 * c.c4) - c.kln * r * r;
-    const double pws = std::exp(L);
-    const double inv = 1.0 / (p - pws);
-    const double ws = kMolarMassRatio * pws * inv;
-    // dWs/du = Ws L' p / (p - pws); the second derivative by the same quotient rule.
-    const double q = p * inv;
-    const double ws1 = ws * L1 * q;
-    const double ws2 = ws * q * (L2 + L1 * L1 * (1.0 + 2.0 * pws * inv));
-    const double a = b.A - b.alpha * u;
-    const double g = a * ws - 1.006 * (t - u) - w * (b.A + 1.86 * t - b.beta * u);
-    const double g1 = -b.alpha * ws + a * ws1 + 1.006 + b.beta * w;
-    const double g2 = -2.0 * b.alpha * ws1 + a * ws2;
-    const double den = 2.0 * g1 * g1 - g * g2;
-    return {g, den > 0.0 ? -2.0 * g * g1 / den : -g / g1};
+    const WetBulbBranch& b = kWetBulbBranch[branch];
+    constexpr double kInvMolarMassRatio = 1.0 / kMolarMassRatio;
+    const double q0 = (m.m * (b.A + 1.86 * t) + 1.006 * m.s * t) * kInvMolarMassRatio;
+    const double k = (m.m * b.beta + 1.006 * m.s) * kInvMolarMassRatio;
+    return {&kSat[branch], &kDerivative[branch], p, q0, k, b.A * m.s + q0, b.alpha * m.s + k};
 }
 
-// Halley converges cubically: after a step s the error left is about K s^3, with
-// K below 2e-4 / K^2 over -100 .. 200 C, 60 .. 110 kPa; a step under 0.1 K leaves
-// at most 2e-7 K (checked against a bisection to 1e-12 K in the unit tests), and
-// lets nine wet bulbs in ten stop after a single step.
-constexpr double kHalleyStepTolerance = 0.1;
-
-// Safeguarded solve of g = 0 in [lo, hi] (g(lo) <= 0 <= g(hi)) from u0: at most
-// 8 Halley steps, each kept inside the shrinking bracket (bisection otherwise),
-// then bisection: bounded, always an answer. From the first guess below one or
-// two steps are the rule.
-double solveWetBulbBranch(const WetBulbBranch& b, double t, double w, double p, double lo, double hi, double u0)
+inline double psychrometerResidual(const WetBulbRelation& r, double u)
 {
-    double u = (u0 >= lo && u0 <= hi) ? u0 : 0.5 * (lo + hi); // also catches a NaN guess
-    for (int i = 0; i < 8; ++i) {
-        const HalleyStep s = halleyStep(b, t, w, p, u);
-        if (!(s.g == s.g && s.step == s.step)) {
+    return std::exp(lnPws(*r.sat, u + kKelvinOffset)) * (r.c0 - r.kc * u) - r.p * (r.q0 - r.k * u);
+}
+
+// f at the triple point on eq. 33, for the branch rule.
+inline double liquidResidualAtTriplePoint(const WetBulbRelation& liquid)
+{
+    return kSatPressureTriplePoint * (liquid.c0 - liquid.kc * kTriplePointC)
+        - liquid.p * (liquid.q0 - liquid.k * kTriplePointC);
+}
+
+// One Householder step of order 4 on f at u (std::log and std::exp), with f itself for
+// bracketing: u + 4 (1/f)''' / (1/f)'''', multiplied out. The error after a step s is
+// about C s^5 with C below 1e-7 / K^4 over -100 .. 200 C.
+struct SolverStep {
+    double f, step, errorScale; // errorScale: see kHalleyAcceptance (logHalleyStep only)
+};
+SolverStep householderStep(const WetBulbRelation& r, double u)
+{
+    const SatCoefficients& c = *r.sat;
+    const double T = u + kKelvinOffset;
+    const double invT = 1.0 / T;
+    const double P = std::exp(c.k1 * invT + c.k0 + T * (c.c1 + T * (c.c2 + T * (c.c3 + T * c.c4)))
+                              + c.kln * std::log(T));
+    const LnPwsDerivatives d = lnPwsDerivatives(*r.derivative, T, invT);
+    // pws^(n) / pws from the derivatives of ln pws.
+    const double e1 = d.d1;
+    const double e2 = d.d1 * d.d1 + d.d2;
+    const double e3 = d.d1 * (e2 + 2.0 * d.d2) + d.d3;
+    const double e4 = d.d1 * (e3 + 3.0 * d.d1 * d.d2 + 3.0 * d.d3) + 3.0 * d.d2 * d.d2 + d.d4;
+    const double cu = r.c0 - r.kc * u;
+    const double f = P * cu - r.p * (r.q0 - r.k * u);
+    const double f1 = P * (cu * e1 - r.kc) + r.p * r.k;
+    const double f2 = P * (cu * e2 - 2.0 * r.kc * e1);
+    const double f3 = P * (cu * e3 - 3.0 * r.kc * e2);
+    const double f4 = P * (cu * e4 - 4.0 * r.kc * e3);
+    const double ff = f * f;
+    const double f11 = f1 * f1;
+    const double n3 = f1 * (6.0 * f * f2 - 6.0 * f11) - ff * f3;
+    const double n4 = f11 * (24.0 * f11 - 36.0 * f * f2) + ff * (6.0 * f2 * f2 + 8.0 * f1 * f3 - f * f4);
+    return {f, 4.0 * f * n3 / n4, 0.0};
+}
+constexpr double kOrder4StepTolerance = 0.5; // leaves below 4e-9 K
+
+// Safeguarded solve of f = 0 in [lo, hi] (f(lo) <= 0 <= f(hi)) from u: at most 12
+// order-4 steps, each kept inside the shrinking bracket (bisection otherwise), then
+// bisection to 1e-10 K: bounded, always an answer.
+double solveWetBulbBracketed(const WetBulbRelation& r, double lo, double hi, double u)
+{
+    u = (u >= lo && u <= hi) ? u : 0.5 * (lo + hi); // also catches a NaN guess
+    for (int i = 0; i < 12; ++i) {
+        const SolverStep s = householderStep(r, u);
+        if (!(s.f == s.f && s.step == s.step)) {
             u = 0.5 * (lo + hi);
             continue;
         }
-        if (s.g < 0.0)
+        if (s.f < 0.0)
             lo = u;
-        else if (s.g > 0.0)
+        else if (s.f > 0.0)
             hi = u;
         else
             return u;
         const double next = u + s.step;
-        if (std::abs(s.step) < kHalleyStepTolerance && next >= lo && next <= hi)
+        if (std::abs(s.step) <= kOrder4StepTolerance && next >= lo && next <= hi)
             return next;
         u = (next > lo && next < hi) ? next : 0.5 * (lo + hi);
     }
     for (int i = 0; i < 64 && hi - lo > 1e-10; ++i) {
         const double mid = 0.5 * (lo + hi);
-        if (psychrometerResidual(b, t, w, p, mid) < 0.0)
+        if (psychrometerResidual(r, mid) < 0.0)
             lo = mid;
         else
             hi = mid;
     }
     return 0.5 * (lo + hi);
+}
+
+// Wet-bulb depression x = hi - u (first guess) from a model of f around hi: ln pws by
+// its Taylor polynomial of degree 4 in x, the exact linear c and Q. From the tangent
+// of f at hi, x0 = N / D (below the root), one step of order 4 (the inverse series to
+// the cube of the Newton step) on the logarithm of both sides,
+// F(x) = ln(pws c / (p Q)), nearly linear for hot, dry air. Written so that the
+// logarithms and divisions run side by side. Within 0.021 K of the root over
+// -30 .. 50 C, 5 .. 100 % RH, 80 .. 105 kPa, 0.17 K over -40 .. 60 C, 1 .. 100 % RH,
+// 60 .. 110 kPa.
+inline double modelDepression(const WetBulbRelation& r, double hi, double lnPHi, double pHi,
+                              const LnPwsDerivatives& d, double invP)
+{
+    const double qHi = r.q0 - r.k * hi;
+    const double cHi = r.c0 - r.kc * hi;
+    const double N = pHi * cHi - r.p * qHi;
+    const double D = pHi * (d.d1 * cHi - r.kc) + r.p * r.k;
+    const double qD = qHi * D + r.k * N; // Q(hi - x0) D
+    const double x = N / D;
+    const double iq = r.k * D / qD;      // k / Q
+    const double kcOverC = r.kc / cHi;
+    const double v = kcOverC * x;
+    const double ic = kcOverC * (1.0 - v + v * v); // kc / c
+    const double x2 = x * x;
+    const double a4 = d.d4 * (1.0 / 24.0);
+    const double E = x * (-d.d1 + x * 0.5 * d.d2) + x2 * x * (d.d3 * (-1.0 / 6.0) + x * a4);
+    const double E1 = (-d.d1 + x * d.d2) + x2 * (-0.5 * d.d3 + x * (4.0 * a4));
+    const double E2 = (d.d2 - x * d.d3) + x2 * 0.5 * d.d4;
+    const double E3 = -d.d3 + x * d.d4;
+    const double F = lnPHi + (preciseLog(cHi * D * invP) - preciseLog(qD)) + E
+        + v * (1.0 + v * (-0.5 + v * (1.0 / 3.0)));
+    const double F1 = E1 + ic - iq;
+    const double F2 = E2 - ic * ic + iq * iq;
+    const double F3 = E3 + 2.0 * (ic * ic * ic - iq * iq * iq);
+    const double invF1 = 1.0 / F1; // ready before F
+    const double c2 = -0.5 * F2 * invF1;
+    const double c3 = 2.0 * c2 * c2 - F3 * invF1 * (1.0 / 6.0);
+    const double n = -F * invF1;
+    return x + n * (1.0 + n * (c2 + n * c3));
+}
+
+// ln(T - x) from ln T: ln T - 2 atanh(z), z = x / (2 T - x), by the series to z^13
+// (error below 5e-15 for z <= 0.125, about 50 K below room temperature).
+inline double lnTemperatureBelow(double T, double lnT, double x)
+{
+    const double z = x / (2.0 * T - x);
+    if (!(z <= 0.125)) [[unlikely]]
+        return std::log(T - x);
+    const double z2 = z * z;
+    const double z4 = z2 * z2;
+    const double z8 = z4 * z4;
+    const double s = (1.0 + z2 * (1.0 / 3.0)) + z4 * ((1.0 / 5.0) + z2 * (1.0 / 7.0))
+        + z8 * (((1.0 / 9.0) + z2 * (1.0 / 11.0)) + z4 * (1.0 / 13.0));
+    return lnT - 2.0 * z * s;
+}
+
+// One Halley step on F(u) = ln(pws(u) c(u) / (p Q(u))), which has f's root and needs
+// no exponential: F and F' exact (eq. 5 / 6 from T = u + 273.15, 1/T and ln T; ln c and
+// ln Q by preciseLog; ln p given), F'' from d2, the second derivative of ln pws at u,
+// which only corrects the step and may be approximate. With F for bracketing.
+inline SolverStep logHalleyStep(const WetBulbRelation& r, double u, double T, double invT, double lnT, double lnP,
+                                double d2)
+{
+    const SatCoefficients& c = *r.sat;
+    const DerivativeCoefficients& dc = *r.derivative;
+    const double T2 = T * T;
+    const double L = (c.k1 * invT + c.k0) + T * (c.c1 + T * c.c2) + T2 * T * (c.c3 + T * c.c4) + c.kln * lnT;
+    const double d1 = dc.a1 * invT * invT + dc.b0 + T * dc.b1 + T2 * (dc.b2 + T * dc.b3) + dc.kln * invT;
+    const double cu = r.c0 - r.kc * u;
+    const double qu = r.q0 - r.k * u;
+    const double a = r.kc / cu;
+    const double b = r.k / qu;
+    const double F = L + (preciseLog(cu) - lnP) - preciseLog(qu);
+    const double F1 = d1 - a + b;
+    const double F2 = d2 - a * a + b * b;
+    const double step = -2.0 * F * F1 / (2.0 * F1 * F1 - F * F2);
+    return {F, step, step * step * step * (2e-4 + b * b)};
+}
+
+// After a Halley step s on F the error is below 0.14 |s|^3 (2e-4 / K^2 + (k/Q)^2)
+// for |s| up to 10 mK (checked over -100 .. 200 C, 0 .. 100 % RH, 20 .. 110 kPa from
+// guesses 3 and 10 mK off); the second term is ln Q's curvature, large for cold, dry
+// air (small Q), where the model's guess is closest. The approximate F'' adds about
+// 0.04 e s^2 for a relative error e in it, so the step must also stay small. Accepted:
+// |s| <= 10 mK and the bound below 1.4e-9 K.
+constexpr double kHalleyStepTolerance = 0.01;
+constexpr double kHalleyAcceptance = 1e-8; // bound on |s|^3 (2e-4 + (k/Q)^2)
+
+constexpr double kTriplePointK = kTriplePointC + kKelvinOffset;
+const double kLnTriplePointK = std::log(kTriplePointK);
+
+// eq. 5 / 6 at the bracket's upper end hi.
+struct UpperEnd {
+    double hi, T, invT, lnT, lnP, P;
+};
+
+// The solve on one branch below hi, bracketed below by lowest (the triple point on
+// eq. 33, -100 C on eq. 35): the model's guess, one exact Halley step, and the
+// safeguarded solve if that step was not small.
+inline double wetBulbBelow(const WetBulbRelation& r, const UpperEnd& e, double lowest, double invP, double lnP,
+                           Moisture m)
+{
+    const double hi = e.hi;
+    if (e.P * (r.c0 - r.kc * hi) <= r.p * (r.q0 - r.k * hi)) [[unlikely]]
+        return hi; // saturated: f(hi) <= 0
+
+    const LnPwsDerivatives d = lnPwsDerivatives(*r.derivative, e.T, e.invT);
+    const double xModel = modelDepression(r, hi, e.lnP, e.P, d, invP);
+    const double xTop = hi - lowest;
+    const double xPositive = xModel > 0.0 ? xModel : 0.0; // maxsd and minsd, no jumps
+    const double x = xPositive < xTop ? xPositive : xTop;
+    const double u0 = hi - x;
+    const double T0 = e.T - x;
+    // ln pws'' at u0 from its Taylor polynomial at hi: close enough for F''.
+    const double d2 = d.d2 + x * (-d.d3 + x * 0.5 * d.d4);
+    const SolverStep s = logHalleyStep(r, u0, T0, 1.0 / T0, lnTemperatureBelow(e.T, e.lnT, x), lnP, d2);
+    const double u1 = u0 + s.step;
+    if (std::abs(s.step) <= kHalleyStepTolerance && std::abs(s.errorScale) <= kHalleyAcceptance && u1 >= lowest
+        && u1 <= hi) [[likely]]
+        return u1;
+
+    // Rare (far outside the usual range): the safeguarded solve, bracketed below by
+    // the dew point on eq. 35 (f <= 0 there).
+    double lo = lowest;
+    const double pw = r.p * m.m / (kMolarMassRatio * m.s + m.m);
+    if (lowest < kTriplePointC && pw > kMinSatPressure) {
+        const double y = std::log(pw);
+        lo = std::max(1.0 / fittedInverseDewPoint(y, inverseBranch(y)) - kKelvinOffset - 1e-3, kMinTemperatureC);
+    }
+    return solveWetBulbBracketed(r, std::min(lo, hi), hi, u1);
+}
+
+// Eq. 35 for a dry bulb above the triple point (dry air a few kelvin above
+// freezing): the upper end is the triple point.
+[[gnu::noinline]] double wetBulbIceBelowTriplePoint(double t, Moisture m, double p, double invP)
+{
+    static const UpperEnd kTriple = {kTriplePointC,   kTriplePointK,     1.0 / kTriplePointK,
+                                     kLnTriplePointK, kLnPwsTriplePoint, kSatPressureTriplePoint};
+    return wetBulbBelow(wetBulbRelation(0, t, m, p), kTriple, kMinTemperatureC, invP, preciseLog(p), m);
+}
+
+// The solve where the water boils at p (pws(t) >= p): Ws is unbounded there, so the
+// bracket ends just below the boiling point. Rare; bracketed throughout.
+[[gnu::noinline]] double wetBulbNearBoiling(double t, Moisture m, double p)
+{
+    const double top = std::min(t, dewPointFromVapourPressure(std::min(p, kMaxSatPressure)) - 1e-6);
+    const bool liquid = top >= kTriplePointC && liquidResidualAtTriplePoint(wetBulbRelation(1, t, m, p)) <= 0.0;
+    const WetBulbRelation r = wetBulbRelation(liquid ? 1 : 0, t, m, p);
+    const double hi = liquid ? top : std::min(top, kTriplePointC);
+    if (psychrometerResidual(r, hi) <= 0.0)
+        return hi;
+    double lo = liquid ? kTriplePointC : kMinTemperatureC;
+    const double pw = p * m.m / (kMolarMassRatio * m.s + m.m);
+    if (!liquid && pw > kMinSatPressure) {
+        const double y = std::log(pw);
+        lo = std::max(1.0 / fittedInverseDewPoint(y, inverseBranch(y)) - kKelvinOffset - 1e-3, kMinTemperatureC);
+    }
+    return solveWetBulbBracketed(r, std::min(lo, hi), hi, hi);
+}
+
+// Eq. 5 / 6 at the dry bulb with the pieces the wet-bulb solve reuses.
+struct DryBulbSaturation {
+    double T, invT, lnT, lnPws, pws;
+};
+inline DryBulbSaturation dryBulbSaturation(double tC)
+{
+    const SatCoefficients& c = satBranch(tC);
+    const double T = tC + kKelvinOffset;
+    const double invT = 1.0 / T;
+    const double lnT = preciseLog(T);
+    const double L = c.k1 * invT + c.k0 + T * (c.c1 + T * (c.c2 + T * (c.c3 + T * c.c4))) + c.kln * lnT;
+    return {T, invT, lnT, L, preciseExp(L)};
+}
+
+// The wet bulb by the branch rule (see wetBulb in PsychroRaw.h), given eq. 5 / 6 at t
+// and 1 / p. Branch rule: eq. 33 when its root is at or above the triple point (its
+// f at 0.01 C not above 0), else eq. 35. The bracket's upper end is the dry bulb, or
+// the triple point on eq. 35 when the dry bulb is above it; its lower end is the
+// triple point on eq. 33 and the dew point on eq. 35. The one jump that follows the
+// data, on the sign of t, depends on an input only and settles at once.
+double wetBulbFromSaturation(double t, Moisture m, double p, double invP, const DryBulbSaturation& sat)
+{
+    if (!(sat.pws < p)) [[unlikely]]
+        return wetBulbNearBoiling(t, m, p);
+    const UpperEnd atT = {t, sat.T, sat.invT, sat.lnT, sat.lnPws, sat.pws};
+    const double lnP = preciseLog(p);
+    if (t >= kTriplePointC) {
+        const WetBulbRelation liquid = wetBulbRelation(1, t, m, p);
+        if (liquidResidualAtTriplePoint(liquid) <= 0.0) [[likely]]
+            return wetBulbBelow(liquid, atT, kTriplePointC, invP, lnP, m);
+        return wetBulbIceBelowTriplePoint(t, m, p, invP);
+    }
+    return wetBulbBelow(wetBulbRelation(0, t, m, p), atT, kMinTemperatureC, invP, lnP, m);
 }
 
 } // namespace
@@ -197,11 +514,18 @@ double satHumidityRatio(double tC, double p) { return humidityRatioFromVapourPre
 
 double dewPointFromLnVapourPressure(double lnPw)
 {
+    // The fit gives 1/T; one Newton step on ln pws(T) = ln pw then needs a single
+    // division (T itself), and ln T = -ln(1/T) starts at once.
     const int branch = inverseBranch(lnPw);
     const SatCoefficients& c = kSat[branch];
-    double T = fittedDewPointKelvin(lnPw, branch);
-    T -= (lnPws(c, T) - lnPw) / dLnPws(c, T);
-    return std::clamp(T - kKelvinOffset, -100.0, 200.0);
+    const DerivativeCoefficients& dc = kDerivative[branch];
+    const double r = fittedInverseDewPoint(lnPw, branch);
+    const double T = 1.0 / r;
+    const double lnT = -preciseLog(r);
+    const double T2 = T * T;
+    const double L = (c.k1 * r + c.k0) + T * (c.c1 + T * c.c2) + T2 * T * (c.c3 + T * c.c4) + c.kln * lnT;
+    const double d1 = dc.a1 * r * r + dc.b0 + T * dc.b1 + T2 * (dc.b2 + T * dc.b3) + dc.kln * r;
+    return std::clamp(T - (L - lnPw) / d1 - kKelvinOffset, -100.0, 200.0);
 }
 
 double dewPointFromVapourPressure(double pw) { return dewPointFromLnVapourPressure(std::log(pw)); }
@@ -218,73 +542,12 @@ double wetBulbWaterEnthalpy(double tC)
     return tC >= kTriplePointC ? 4186.0 * tC : (-329.0 + 2.1 * tC) * 1000.0;
 }
 
-double wetBulb(double t, double w, double p) { return wetBulbWithSatPressure(t, w, p, satPressure(t)); }
-
-double wetBulbWithSatPressure(double t, double w, double p, double pwsT)
+double wetBulb(double t, double w, double p)
 {
-    // Bracket [lo, hi] on one branch: g <= 0 at and below the dew point on either
-    // branch, g >= 0 at the dry bulb (or just under the boiling point where
-    // pws(t) >= p, since Ws grows without bound there).
-    double hi = t;
-    double pwsHi = pwsT;
-    if (pwsT >= p) [[unlikely]] {
-        hi = dewPointFromVapourPressure(std::min(p, kMaxSatPressure)) - 1e-6;
-        pwsHi = satPressure(hi);
-    }
-    // The fitted dew point (no Newton step) is within 1e-4 K; 1e-3 K below it g
-    // is certainly negative.
-    const double pw = vapourPressureFromHumidityRatio(w, p);
-    double tdp = -100.0;
-    if (pw > kMinSatPressure) [[likely]] {
-        const double y = approxLog(pw);
-        tdp = std::max(fittedDewPointKelvin(y, inverseBranch(y)) - kKelvinOffset - 1e-3, -100.0);
-    }
-    if (tdp >= hi) [[unlikely]]
-        return hi;
-
-    // Branch rule: eq. 33 when its root is at or above the triple point, else eq. 35.
-    const WetBulbBranch& liquidBranch = kWetBulbBranch[1];
-    const double wsTriple = humidityRatioFromVapourPressure(kSatPressureTriplePoint, p);
-    const double gLiquidAtTriple = (liquidBranch.A - liquidBranch.alpha * kTriplePointC) * wsTriple
-        - 1.006 * (t - kTriplePointC) - w * (liquidBranch.A + 1.86 * t - liquidBranch.beta * kTriplePointC);
-    const bool liquid = hi >= kTriplePointC && (tdp >= kTriplePointC || gLiquidAtTriple <= 0.0);
-    const WetBulbBranch& b = kWetBulbBranch[liquid ? 1 : 0];
-    // Selections written as conditional expressions so they compile to moves.
-    const bool raiseLo = liquid && tdp < kTriplePointC;
-    const double lo = raiseLo ? kTriplePointC : tdp;
-    const double wsLo = raiseLo ? wsTriple : w; // Ws at the dew point is W
-    const double gLo = raiseLo ? gLiquidAtTriple : -(t - tdp) * (1.006 + 1.86 * w);
-    const bool lowerHi = !liquid && hi > kTriplePointC;
-    hi = lowerHi ? kTriplePointC : hi;
-    pwsHi = lowerHi ? kSatPressureTriplePoint : pwsHi;
-
-    // Three cheap estimates from the ends of the bracket: for the convex,
-    // increasing g, a Newton step from hi lands above the root and the chord
-    // through both ends below it; a Newton step from lo on
-    // ln((A - alpha u) Ws) = ln(W b(u) + 1.006 (t - u)), nearly linear for hot,
-    // dry air, is clamped between the two.
-    const double wsHi = humidityRatioFromVapourPressure(pwsHi, p);
-    const double aHi = b.A - b.alpha * hi;
-    const double gHi = aHi * wsHi - 1.006 * (t - hi) - w * (b.A + 1.86 * t - b.beta * hi);
-    if (gHi <= 0.0) [[unlikely]]
-        return hi;
-    const double dConst = 1.006 + b.beta * w;
-    const double g1Hi = -b.alpha * wsHi + aHi * wsHi * dLnSatPressure(hi) * p / (p - pwsHi) + dConst;
-    const double newtonHi = hi - gHi / g1Hi;
-    const double upper = newtonHi >= lo && newtonHi <= hi ? newtonHi : hi;
-    const double chord = lo - gLo * (hi - lo) / (gHi - gLo);
-    const double lower = chord >= lo && chord <= upper ? chord : lo;
-    const double aLo = b.A - b.alpha * lo;
-    const double rhs = w * (b.A + 1.86 * t - b.beta * lo) + 1.006 * (t - lo);
-    const double pwsLo = vapourPressureFromHumidityRatio(wsLo, p);
-    const double f = approxLog(aLo * wsLo / rhs);
-    const double df = -b.alpha / aLo + dLnSatPressure(lo) * p / (p - pwsLo) + dConst / rhs;
-    const double logStep = lo - f / df;
-    const double u0 = (logStep == logStep) ? std::clamp(logStep, lower, upper) : 0.5 * (lower + upper);
-
-    const double twb = solveWetBulbBranch(b, t, w, p, lo, hi, u0);
-    return std::clamp(twb, -100.0, t);
+    return wetBulbFromSaturation(t, moistureFromHumidityRatio(w), p, 1.0 / p, dryBulbSaturation(t));
 }
+
+double wetBulbWithSatPressure(double t, double w, double p, double /*pwsT*/) { return wetBulb(t, w, p); }
 
 } // namespace detail
 
@@ -292,71 +555,99 @@ namespace {
 
 using namespace detail;
 
-const std::string kTemperatureRange = "-100 .. 200 °C";
+// The checks are inline and cheap; building a message is out of line and cold, so
+// the hot paths stay small.
+[[noreturn, gnu::cold, gnu::noinline]] void throwOutOfRange(const char* quantity, double value, const char* unit,
+                                                            const std::string& range)
+{
+    throw InputError(quantity, value, unit, range);
+}
 
-double checkedCelsius(AbsoluteTemperature t, const char* quantity)
+inline double checkedCelsius(AbsoluteTemperature t, const char* quantity)
 {
     const double c = toCelsius(t);
-    if (!(c >= kMinTemperatureC && c <= kMaxTemperatureC))
-        throw InputError(quantity, c, "°C", kTemperatureRange);
+    if (!(c >= kMinTemperatureC && c <= kMaxTemperatureC)) [[unlikely]]
+        throwOutOfRange(quantity, c, "°C", "-100 .. 200 °C");
     return c;
 }
 
-double checkedPressure(Pressure p)
+inline double checkedPressure(Pressure p)
 {
     const double v = toPascals(p);
-    if (!(v > 0.0 && std::isfinite(v)))
-        throw InputError("pressure", v, "Pa", "a finite value above 0 Pa");
+    if (!(v > 0.0 && v <= std::numeric_limits<double>::max())) [[unlikely]]
+        throwOutOfRange("pressure", v, "Pa", "a finite value above 0 Pa");
     return v;
 }
 
-double checkedRelativeHumidity(Ratio rh)
+inline double checkedRelativeHumidity(Ratio rh)
 {
     const double v = toFraction(rh);
-    if (!(v >= 0.0 && v <= 1.0))
-        throw InputError("relative humidity", v * 100.0, "%", "0 .. 100 %");
+    if (!(v >= 0.0 && v <= 1.0)) [[unlikely]]
+        throwOutOfRange("relative humidity", v * 100.0, "%", "0 .. 100 %");
     return v;
 }
 
-double checkedHumidityRatio(HumidityRatio w)
+inline double checkedHumidityRatio(HumidityRatio w)
 {
     const double v = toKilogramsPerKilogram(w);
-    if (!(v >= 0.0 && std::isfinite(v)))
-        throw InputError("humidity ratio", v * 1000.0, "g/kg", "0 g/kg and above (finite)");
+    if (!(v >= 0.0 && v <= std::numeric_limits<double>::max())) [[unlikely]]
+        throwOutOfRange("humidity ratio", v * 1000.0, "g/kg", "0 g/kg and above (finite)");
     return v;
+}
+
+// The vapour pressure phi pws(t) reaches p: no such state (the water boils at p).
+[[noreturn, gnu::cold, gnu::noinline]] void throwRelativeHumidityAboveBoiling(double phi, double p, double pws)
+{
+    throwOutOfRange("relative humidity", phi * 100.0, "%",
+                    "0 .. " + formatFixed(100.0 * p / pws, 2) + " % (vapour pressure below " + formatNumber(p)
+                        + " Pa)");
+}
+
+[[noreturn, gnu::cold, gnu::noinline]] void throwBoilingPressure(double tC, double pws, double p)
+{
+    throwOutOfRange("pressure", p, "Pa",
+                    "above the saturation pressure " + formatFixed(pws, 0) + " Pa at " + formatFixed(tC, 2) + " °C");
+}
+
+[[noreturn, gnu::cold, gnu::noinline]] void throwAboveSaturation(double tC, double w, double ws, double p)
+{
+    throwOutOfRange("humidity ratio", w * 1000.0, "g/kg",
+                    "0 .. " + formatFixed(ws * 1000.0, 4) + " g/kg (saturation at " + formatFixed(tC, 2) + " °C, "
+                        + formatFixed(p, 0) + " Pa)");
+}
+
+[[noreturn, gnu::cold, gnu::noinline]] void throwDewPointVapourPressure(double pw)
+{
+    throwOutOfRange("vapour pressure", pw, "Pa",
+                    formatNumber(kMinSatPressure) + " .. " + formatNumber(kMaxSatPressure)
+                        + " Pa (dew point -100 .. 200 °C)");
 }
 
 // Ws(t) at p, or a message when the saturation pressure reaches p (no saturated
 // state exists: the water boils at p).
-double checkedSatHumidityRatio(double tC, double pws, double p)
+inline double checkedSatHumidityRatio(double tC, double pws, double p)
 {
-    if (!(pws < p))
-        throw InputError("pressure", p, "Pa",
-                         "above the saturation pressure " + formatFixed(pws, 0) + " Pa at " + formatFixed(tC, 2)
-                             + " °C");
+    if (!(pws < p)) [[unlikely]]
+        throwBoilingPressure(tC, pws, p);
     return humidityRatioFromVapourPressure(pws, p);
 }
 
 // W within 0 .. Ws(t) (a relative 1e-9 above saturation is taken as saturated and
 // clamped); any W >= 0 where pws(t) >= p. Returns the clamped W.
-double checkedUnsaturated(double tC, double w, double pws, double p)
+inline double checkedUnsaturated(double tC, double w, double pws, double p)
 {
-    if (!(pws < p))
+    if (!(pws < p)) [[unlikely]]
         return w;
     const double ws = humidityRatioFromVapourPressure(pws, p);
-    if (w > ws * (1.0 + kSaturationTolerance))
-        throw InputError("humidity ratio", w * 1000.0, "g/kg",
-                         "0 .. " + formatFixed(ws * 1000.0, 4) + " g/kg (saturation at " + formatFixed(tC, 2)
-                             + " °C, " + formatFixed(p, 0) + " Pa)");
+    if (w > ws * (1.0 + kSaturationTolerance)) [[unlikely]]
+        throwAboveSaturation(tC, w, ws, p);
     return std::min(w, ws);
 }
 
-double checkedDewPointVapourPressure(double pw)
+inline double checkedDewPointVapourPressure(double pw)
 {
-    if (!(pw >= kMinSatPressure && pw <= kMaxSatPressure))
-        throw InputError("vapour pressure", pw, "Pa",
-                         formatNumber(kMinSatPressure) + " .. " + formatNumber(kMaxSatPressure)
-                             + " Pa (dew point -100 .. 200 °C)");
+    if (!(pw >= kMinSatPressure && pw <= kMaxSatPressure)) [[unlikely]]
+        throwDewPointVapourPressure(pw);
     return pw;
 }
 
@@ -410,11 +701,10 @@ HumidityRatio humidityRatioFromRelativeHumidity(AbsoluteTemperature t, Ratio rh,
     const double tC = checkedCelsius(t, "dry-bulb temperature");
     const double phi = checkedRelativeHumidity(rh);
     const double p = checkedPressure(pressure);
-    const double pw = phi * satPressure(tC);
-    if (!(pw < p))
-        throw InputError("relative humidity", phi * 100.0, "%",
-                         "0 .. " + formatFixed(100.0 * p / satPressure(tC), 2) + " % (vapour pressure below "
-                             + formatNumber(p) + " Pa)");
+    const double pws = satPressure(tC);
+    const double pw = phi * pws;
+    if (!(pw < p)) [[unlikely]]
+        throwRelativeHumidityAboveBoiling(phi, p, pws);
     return kilogramsPerKilogram(detail::humidityRatioFromVapourPressure(pw, p));
 }
 
@@ -436,16 +726,16 @@ AbsoluteTemperature dewPointFromHumidityRatio(HumidityRatio w, Pressure pressure
 {
     const double p = checkedPressure(pressure);
     const double pw = detail::vapourPressureFromHumidityRatio(checkedHumidityRatio(w), p);
-    return celsius(detail::dewPointFromVapourPressure(checkedDewPointVapourPressure(pw)));
+    return celsius(detail::dewPointFromLnVapourPressure(preciseLog(checkedDewPointVapourPressure(pw))));
 }
 
 AbsoluteTemperature wetBulbFromHumidityRatio(AbsoluteTemperature t, HumidityRatio w, Pressure pressure)
 {
     const double tC = checkedCelsius(t, "dry-bulb temperature");
     const double p = checkedPressure(pressure);
-    const double pws = satPressure(tC);
-    const double wv = checkedUnsaturated(tC, checkedHumidityRatio(w), pws, p);
-    return celsius(wetBulbWithSatPressure(tC, wv, p, pws));
+    const DryBulbSaturation sat = dryBulbSaturation(tC);
+    const double wv = checkedUnsaturated(tC, checkedHumidityRatio(w), sat.pws, p);
+    return celsius(wetBulbFromSaturation(tC, moistureFromHumidityRatio(wv), p, 1.0 / p, sat));
 }
 
 AbsoluteTemperature wetBulbFromRelativeHumidity(AbsoluteTemperature t, Ratio rh, Pressure pressure)
@@ -453,13 +743,13 @@ AbsoluteTemperature wetBulbFromRelativeHumidity(AbsoluteTemperature t, Ratio rh,
     const double tC = checkedCelsius(t, "dry-bulb temperature");
     const double phi = checkedRelativeHumidity(rh);
     const double p = checkedPressure(pressure);
-    const double pws = satPressure(tC);
-    const double pw = phi * pws;
-    if (!(pw < p))
-        throw InputError("relative humidity", phi * 100.0, "%",
-                         "0 .. " + formatFixed(100.0 * p / pws, 2) + " % (vapour pressure below " + formatNumber(p)
-                             + " Pa)");
-    return celsius(wetBulbWithSatPressure(tC, detail::humidityRatioFromVapourPressure(pw, p), p, pws));
+    const DryBulbSaturation sat = dryBulbSaturation(tC);
+    // The vapour pressure as a fraction of p: no humidity ratio (and no division) needed.
+    const double invP = 1.0 / p;
+    const double x = phi * sat.pws * invP;
+    if (!(x < 1.0)) [[unlikely]]
+        throwRelativeHumidityAboveBoiling(phi, p, sat.pws);
+    return celsius(wetBulbFromSaturation(tC, moistureFromVapourFraction(x), p, invP, sat));
 }
 
 HumidityRatio humidityRatioFromWetBulb(AbsoluteTemperature t, AbsoluteTemperature wetBulb, Pressure pressure)

@@ -72,12 +72,22 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, double warmDewPoint
     const double cw = warm.capacity();
     const double qDry = rate(1.0);
     const double tDry = warm.t - qDry / cw;
-    if (warm.w <= raw::satHumidityRatio(tDry, warm.p))
+    // Saturation humidity ratio, remembering the last one: the solve asks again
+    // for the temperatures it has just tried (tDry, and the root it returns).
+    double lastT = tDry, lastWs = raw::satHumidityRatio(tDry, warm.p);
+    auto satW = [&](double t) {
+        if (t != lastT) {
+            lastT = t;
+            lastWs = raw::satHumidityRatio(t, warm.p);
+        }
+        return lastWs;
+    };
+    if (warm.w <= lastWs)
         return {qDry, tDry, warm.w, 0.0, 1.0};
 
     const double hIn = raw::enthalpy(warm.t, warm.w);
     auto qAir = [&](double t) {
-        const double ws = raw::satHumidityRatio(t, warm.p);
+        const double ws = satW(t);
         if (ws >= warm.w)
             return cw * (warm.t - t);
         return warm.m * (hIn - raw::enthalpy(t, ws) - (warm.w - ws) * condensateEnthalpy(t));
@@ -111,7 +121,7 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, double warmDewPoint
     }
     const double t = hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance).x;
     const double q = qAir(t);
-    const double ws = std::min(warm.w, raw::satHumidityRatio(t, warm.p));
+    const double ws = std::min(warm.w, satW(t));
     return {q, t, ws, warm.m * (warm.w - ws), meanSlope(t, q)};
 }
 

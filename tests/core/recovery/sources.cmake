@@ -3,4 +3,6 @@ list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
     core/recovery/AirToAirExchangerTest.cpp
     core/recovery/FrostOnsetTest.cpp
     core/recovery/BracketedRootTest.cpp
+    core/recovery/HeatRecoveryEvaluatorTest.cpp
+    core/recovery/AirToAirExchangerControlTest.cpp
 )

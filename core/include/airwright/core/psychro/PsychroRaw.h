@@ -32,16 +32,19 @@ inline double humidityRatioFromVapourPressure(double pw, double p) { return kMol
 inline double vapourPressureFromHumidityRatio(double w, double p) { return p * w / (kMolarMassRatio + w); }
 double satHumidityRatio(double tC, double p);
 
-// Inverse of satPressure: a fitted first guess then one Newton step on ln pws;
-// within 1e-8 K of the exact root. Precondition: minSatPressure() <= pw <= maxSatPressure().
+// Inverse of satPressure: a fitted 1/T then one Newton step on ln pws; within 1e-10 K
+// of the exact root. Precondition: minSatPressure() <= pw <= maxSatPressure().
 double dewPointFromVapourPressure(double pw);
 double dewPointFromLnVapourPressure(double lnPw);
 
 // Wet bulb by the branch rule of Psychrometrics.h: eq. 33 when it has a root at or
-// above the triple point, otherwise eq. 35. Within 1e-6 K of the exact root.
-// Precondition: t in range, 0 <= w <= Ws(t) (any w >= 0 when pws(t) >= p).
+// above the triple point, otherwise eq. 35. Within 1e-8 K of the exact root (a model's
+// guess, one Halley step, a safeguarded solve when that step is not small; see
+// docs/psychrometrics.md). Precondition: t in range, 0 <= w <= Ws(t) (any w >= 0 when
+// pws(t) >= p).
 double wetBulb(double tC, double w, double p);
-// The same with pws(tC) already at hand (saves one exp and one log).
+// Kept for existing callers: the same as wetBulb (pws(tC) is recomputed together with
+// the pieces the solve reuses, so passing it saves nothing any more).
 double wetBulbWithSatPressure(double tC, double w, double p, double pwsT);
 // Eq. 33 (twb >= triple point) or eq. 35; may be negative for a too low twb.
 double humidityRatioFromWetBulb(double tC, double twbC, double p);
