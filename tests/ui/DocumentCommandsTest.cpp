@@ -40,9 +40,10 @@ TEST_F(DocumentCommandsTest, AddUndoRedo)
     ASSERT_EQ(stack().count(), 1);
     const auto& extract = document.project().unit.extract;
     ASSERT_EQ(extract.size(), before.unit.extract.size() + 1);
-    EXPECT_EQ(extract[1].id, "silencer");
+    // The demo's supply already has a "silencer": ids are unique across both paths.
+    EXPECT_EQ(extract[1].id, "silencer-2");
     EXPECT_TRUE(std::holds_alternative<Sections::PassiveSection>(extract[1].spec));
-    EXPECT_EQ(document.selectedSection(), QStringLiteral("silencer"));
+    EXPECT_EQ(document.selectedSection(), QStringLiteral("silencer-2"));
     EXPECT_TRUE(document.isModified());
     const Project::Project after = document.project();
 

@@ -8,6 +8,7 @@
 #include "airwright/ui/EditInfoCommand.h"
 #include "airwright/ui/MainWindow.h"
 #include "airwright/ui/ScreenshotWriter.h"
+#include "airwright/ui/SectionCatalog.h"
 #include "airwright/ui/SectionPaths.h"
 #include "airwright/ui/UnitDrawing.h"
 #include "airwright/ui/UnitSystem.h"
@@ -105,8 +106,8 @@ TEST_F(MainWindowTest, EditCommandsActOnTheSelection)
     // Adding from the palette goes after the selected section of that path.
     drawing->selectPlace({PathKind::Extract, 0});
     window.addSection(static_cast<int>(SectionCatalog::Entry::Silencer), static_cast<int>(PathKind::Extract));
-    EXPECT_EQ(window.document()->project().unit.extract[1].id, "silencer");
-    EXPECT_EQ(window.document()->selectedSection(), QStringLiteral("silencer"));
+    EXPECT_EQ(window.document()->project().unit.extract[1].id, "silencer-2");
+    EXPECT_EQ(window.document()->selectedSection(), QStringLiteral("silencer-2"));
     EXPECT_EQ(window.document()->undoStack()->count(), 5);
 }
 

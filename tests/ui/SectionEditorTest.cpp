@@ -142,7 +142,8 @@ TEST(FieldQuantityTest, EditTextAndParse)
     EXPECT_EQ(FieldQuantity::editText(0.4), QStringLiteral("0.4"));
     EXPECT_EQ(FieldQuantity::editText(101325.0), QStringLiteral("101325"));
     EXPECT_EQ(FieldQuantity::editText(-12.0), QStringLiteral("-12"));
-    EXPECT_EQ(FieldQuantity::editText(-0.000001), QStringLiteral("0"));
+    EXPECT_EQ(FieldQuantity::editText(-0.000001), QStringLiteral("-0.000001"));
+    EXPECT_EQ(FieldQuantity::editText(-0.0000001), QStringLiteral("0")); // no "-0"
     EXPECT_EQ(FieldQuantity::parse(QStringLiteral(" 1 250,5 ")).value_or(-1.0), 1250.5);
     EXPECT_FALSE(FieldQuantity::parse(QStringLiteral("")).has_value());
     EXPECT_FALSE(FieldQuantity::parse(QStringLiteral("12a")).has_value());

@@ -9,7 +9,6 @@
 #include "airwright/ui/UnitSystem.h"
 
 #include <QApplication>
-#include <QMimeData>
 #include <QMouseEvent>
 
 namespace Airwright::Ui {
@@ -104,15 +103,14 @@ TEST_F(UnitDrawingTest, DropInsertsWhereItLands)
     const QPointF at(filter.left() - 1.0, filter.center().y());
     EXPECT_EQ(drawing->insertionIndexAt(PathKind::Extract, at.x()), 1);
 
-    QMimeData mime;
+    // What the drop handler does with the entry it reads from the drag's data.
     const auto& entries = SectionCatalog::entries();
     const auto silencer = std::find(entries.begin(), entries.end(), SectionCatalog::Entry::Silencer) - entries.begin();
-    mime.setData(QString::fromLatin1(UnitDrawing::sectionMimeType()), QByteArray::number(static_cast<int>(silencer)));
-    QDropEvent drop(at, Qt::CopyAction, &mime, Qt::LeftButton, Qt::NoModifier);
-    QApplication::sendEvent(drawing.get(), &drop);
+    EXPECT_FALSE(drawing->dropSection(static_cast<int>(silencer), QPointF(at.x(), 2.0))); // above the decks
+    EXPECT_TRUE(drawing->dropSection(static_cast<int>(silencer), at));
     ASSERT_EQ(document.undoStack()->count(), 1);
-    EXPECT_EQ(document.project().unit.extract[1].id, "silencer");
-    EXPECT_EQ(document.selectedSection(), QStringLiteral("silencer"));
+    EXPECT_EQ(document.project().unit.extract[1].id, "silencer-2");
+    EXPECT_EQ(document.selectedSection(), QStringLiteral("silencer-2"));
 }
 
 TEST_F(UnitDrawingTest, KeysWalkTheDecks)

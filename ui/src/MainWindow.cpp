@@ -115,7 +115,18 @@ MainWindow::MainWindow(Options options, QWidget* parent)
     updateStatus();
 }
 
-MainWindow::~MainWindow() = default;
+MainWindow::~MainWindow()
+{
+    // The undo stack announces its clearing while the document is destroyed; by
+    // then this window's members are gone, so stop listening first (and a window
+    // torn down is not a clean exit: the recovery file, if any, stays). The panels
+    // go before the document they point to.
+    m_autosave->stop();
+    disconnect(m_document->undoStack(), nullptr, this, nullptr);
+    disconnect(m_document, nullptr, this, nullptr);
+    qDeleteAll(findChildren<QDockWidget*>(Qt::FindDirectChildrenOnly));
+    delete takeCentralWidget();
+}
 
 UnitDrawing* MainWindow::drawing() const
 {
@@ -176,9 +187,9 @@ void MainWindow::createPanels()
     m_casesDock = dock(tr("Design cases"), QStringLiteral("casesDock"), m_casesEditor, Qt::BottomDockWidgetArea);
     setCorner(Qt::BottomLeftCorner, Qt::LeftDockWidgetArea);
     setCorner(Qt::BottomRightCorner, Qt::RightDockWidgetArea);
-    resizeDocks({m_paletteDock}, {230}, Qt::Horizontal);
+    resizeDocks({m_paletteDock}, {205}, Qt::Horizontal);
     resizeDocks({m_sectionDock}, {400}, Qt::Horizontal);
-    resizeDocks({m_casesDock}, {210}, Qt::Vertical);
+    resizeDocks({m_casesDock}, {175}, Qt::Vertical);
 
     connect(m_palette, &SectionPalette::addRequested, this,
             [this](SectionCatalog::Entry entry, Chain::PathKind path) {
@@ -192,7 +203,7 @@ void MainWindow::createPanels()
     });
 
     m_statusLabel = new QLabel(this);
-    statusBar()->addWidget(m_statusLabel, 1);
+    statusBar()->addPermanentWidget(m_statusLabel);
 }
 
 void MainWindow::createActions()
@@ -453,7 +464,7 @@ bool MainWindow::openFile(const QString& path)
     if (report.migratedFromVersion)
         notes << tr("converted from format version %1").arg(*report.migratedFromVersion);
     if (!report.warnings.empty())
-        notes << tr("%n unknown key(s) ignored", nullptr, static_cast<int>(report.warnings.size()));
+        notes << tr("unknown keys ignored: %1").arg(report.warnings.size());
     statusBar()->showMessage(notes.isEmpty() ? tr("Opened %1").arg(path)
                                              : tr("Opened %1 (%2)").arg(path, notes.join(QStringLiteral("; "))),
                              8000);
@@ -600,9 +611,10 @@ void MainWindow::updateStatus()
                 ++attention;
         }
     m_statusLabel->setStyleSheet({});
-    m_statusLabel->setText(tr("Computed %n design case(s); ", nullptr, static_cast<int>(result->cases.size()))
-                           + tr("%n finding(s), ", nullptr, total)
-                           + tr("%n needing attention.", nullptr, attention));
+    m_statusLabel->setText(tr("Design cases computed: %1.   Findings: %2, %3 needing attention.")
+                               .arg(result->cases.size())
+                               .arg(total)
+                               .arg(attention));
 }
 
 void MainWindow::updateRecentMenu()

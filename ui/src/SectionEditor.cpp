@@ -17,6 +17,8 @@
 #include <QTableWidget>
 #include <QVBoxLayout>
 
+#include <algorithm>
+
 namespace Airwright::Ui {
 
 using namespace Airwright::Core;
@@ -94,6 +96,9 @@ SectionEditor::SectionEditor(ProjectDocument* document, UnitSystem* units, QWidg
     m_results->setSelectionMode(QAbstractItemView::NoSelection);
     m_results->setFocusPolicy(Qt::NoFocus);
     m_results->setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+    m_results->setWordWrap(false);
+    m_results->verticalHeader()->setSectionResizeMode(QHeaderView::Fixed);
+    m_results->verticalHeader()->setDefaultSectionSize(m_results->fontMetrics().height() + 6);
     pageLayout->addWidget(m_results);
     pageLayout->addStretch(1);
     scroll->setWidget(page);
@@ -224,17 +229,22 @@ void SectionEditor::refreshResults()
         const bool fan = r->pressureDrop.value() < 0.0;
         addRow(prefix(fan ? tr("Pressure rise") : tr("Pressure drop")),
                m_units->format(K::Pressure, std::abs(toPascals(r->pressureDrop))));
-        if (std::abs(toKilowatts(r->duty)) >= 0.005)
+        const auto figures = Chain::sectionFigures(*r);
+        const bool hasPower = std::any_of(figures.begin(), figures.end(),
+                                          [](const Chain::Figure& f) { return f.kind == Chain::FigureKind::Power; });
+        if (!hasPower && std::abs(toKilowatts(r->duty)) >= 0.005)
             addRow(prefix(tr("Heat to the air")), m_units->format(K::Power, toKilowatts(r->duty)));
-        for (const auto& figure : Chain::sectionFigures(*r)) {
-            const QString label = prefix(QString::fromStdString(figure.label));
+        for (const auto& figure : figures) {
+            QString label = QString::fromStdString(figure.label);
+            if (!label.isEmpty())
+                label[0] = label[0].toUpper();
+            label = prefix(label);
             if (figure.kind == Chain::FigureKind::Text)
                 addRow(label, QString::fromStdString(figure.text));
             else
                 addRow(label, m_units->format(figure.kind, figure.value));
         }
     }
-    m_results->resizeRowsToContents();
     int height = m_results->horizontalHeader()->height() + 4;
     for (int row = 0; row < m_results->rowCount(); ++row)
         height += m_results->rowHeight(row);

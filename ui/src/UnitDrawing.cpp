@@ -32,7 +32,7 @@ namespace {
 
 // Width of a block: a fixed part (room for the id and the figure) plus the
 // section's length, in metres.
-constexpr double kBaseWeight = 0.45;
+constexpr double kBaseWeight = 0.3;
 constexpr double kPartition = 16.0;
 constexpr double kMaxStretch = 1.8;
 
@@ -70,14 +70,21 @@ UnitDrawing::UnitDrawing(ProjectDocument* document, UnitSystem* units, QWidget* 
         invalidateLayout();
         update();
     });
-    connect(m_document, &ProjectDocument::resultsChanged, this, [this] { update(); });
+    // Block widths depend on the figures shown, so results and units re-lay out too.
+    connect(m_document, &ProjectDocument::resultsChanged, this, [this] {
+        invalidateLayout();
+        update();
+    });
     connect(m_document, &ProjectDocument::selectionChanged, this, [this](const QString& id) {
         const auto& unit = m_document->project().unit;
         if (SectionPaths::indexOf(SectionPaths::path(unit, m_selectedPath), id.toStdString()) < 0)
             m_selectedPath = SectionPaths::other(m_selectedPath);
         update();
     });
-    connect(m_units, &UnitSystem::changed, this, [this] { update(); });
+    connect(m_units, &UnitSystem::changed, this, [this] {
+        invalidateLayout();
+        update();
+    });
 }
 
 QSize UnitDrawing::sizeHint() const
@@ -93,6 +100,7 @@ QSize UnitDrawing::minimumSizeHint() const
 void UnitDrawing::setCaseIndex(int index)
 {
     m_caseIndex = index;
+    invalidateLayout();
     update();
 }
 
@@ -188,55 +196,116 @@ UnitDrawing::Layout UnitDrawing::computeLayout() const
         columns.back().extract = extractShown;
     }
 
-    auto sum = [&](const std::vector<int>& list, const std::vector<Chain::Section>& path) {
+    // Each block is at least as wide as its id and its figure need; beyond that,
+    // widths follow the sections' lengths (pixels per metre found by bisection so
+    // the columns fill the deck).
+    QFont small = font();
+    small.setPointSizeF(small.pointSizeF() * 0.92);
+    QFont idFont = small;
+    idFont.setBold(true);
+    const QFontMetricsF fmId(idFont);
+    const QFontMetricsF fmSmall(small);
+    auto minimumOf = [&](const Chain::Section& s, PathKind kind) {
+        const double idWidth = fmId.horizontalAdvance(QString::fromStdString(s.id));
+        const double figureWidth = fmSmall.horizontalAdvance(keyFigure(kind, s.id));
+        return std::clamp(std::max(idWidth, figureWidth) + 10.0, 44.0, 150.0);
+    };
+    struct Entry {
+        double weight = 0.0;
+        double minimum = 0.0;
+        double width(double perMetre) const { return std::max(minimum, weight * perMetre); }
+    };
+    auto entriesOf = [&](const std::vector<int>& list, const std::vector<Chain::Section>& path, PathKind kind) {
+        std::vector<Entry> out;
+        for (int i : list) {
+            const auto& s = path[static_cast<std::size_t>(i)];
+            out.push_back({weightOf(unit, s), minimumOf(s, kind)});
+        }
+        return out;
+    };
+    auto widthOf = [](const std::vector<Entry>& list, double perMetre) {
         double w = 0.0;
-        for (int i : list)
-            w += weightOf(unit, path[static_cast<std::size_t>(i)]);
+        for (const auto& e : list)
+            w += e.width(perMetre);
         return w;
     };
-    std::vector<double> columnWeights;
-    double totalWeight = 0.0;
+    struct ColumnEntries {
+        std::vector<Entry> supply;
+        std::vector<Entry> extract;
+        Entry anchor;
+    };
+    std::vector<ColumnEntries> entries;
     for (const auto& c : columns) {
-        const double w = c.anchorSupply ? weightOf(unit, supply[static_cast<std::size_t>(*c.anchorSupply)])
-                                        : std::max(sum(c.supply, supply), sum(c.extract, extract));
-        columnWeights.push_back(w);
-        totalWeight += w;
+        ColumnEntries e;
+        if (c.anchorSupply) {
+            const auto& s = supply[static_cast<std::size_t>(*c.anchorSupply)];
+            e.anchor = {weightOf(unit, s), std::max(minimumOf(s, PathKind::Supply), minimumOf(s, PathKind::Extract))};
+        } else {
+            e.supply = entriesOf(c.supply, supply, PathKind::Supply);
+            e.extract = entriesOf(c.extract, extract, PathKind::Extract);
+        }
+        entries.push_back(std::move(e));
     }
-    if (totalWeight <= 0.0)
+    auto columnWidth = [&](std::size_t c, double perMetre) {
+        if (columns[c].anchorSupply)
+            return entries[c].anchor.width(perMetre);
+        return std::max(widthOf(entries[c].supply, perMetre), widthOf(entries[c].extract, perMetre));
+    };
+    auto allColumns = [&](double perMetre) {
+        double w = 0.0;
+        for (std::size_t c = 0; c < columns.size(); ++c)
+            w += columnWidth(c, perMetre);
+        return w;
+    };
+    double perMetre = 0.0;
+    double shrink = 1.0;
+    const double minimumTotal = allColumns(0.0);
+    if (minimumTotal <= 0.0)
         return l;
-    const double perWeight = width / totalWeight;
+    if (minimumTotal >= width) {
+        shrink = width / minimumTotal; // too many sections: everything narrower
+    } else {
+        double lo = 0.0;
+        double hi = width * 10.0;
+        for (int i = 0; i < 60; ++i) {
+            const double mid = (lo + hi) / 2.0;
+            (allColumns(mid) > width ? hi : lo) = mid;
+        }
+        perMetre = lo;
+    }
 
     double x = left;
     for (std::size_t c = 0; c < columns.size(); ++c) {
         const Column& column = columns[c];
-        const double columnWidth = columnWeights[c] * perWeight;
+        const double thisWidth = columnWidth(c, perMetre) * shrink;
         if (column.anchorSupply) {
             Block b;
             b.id = supply[static_cast<std::size_t>(*column.anchorSupply)].id;
             b.spansBoth = true;
             b.supplyIndex = column.anchorSupply;
             b.extractIndex = column.anchorExtract;
-            b.rect = QRectF(x, l.supplyDeck.top(), columnWidth, l.extractDeck.bottom() - l.supplyDeck.top());
-            b.supplyPart = QRectF(x, l.supplyDeck.top(), columnWidth, deckHeight);
-            b.extractPart = QRectF(x, l.extractDeck.top(), columnWidth, deckHeight);
+            b.rect = QRectF(x, l.supplyDeck.top(), thisWidth, l.extractDeck.bottom() - l.supplyDeck.top());
+            b.supplyPart = QRectF(x, l.supplyDeck.top(), thisWidth, deckHeight);
+            b.extractPart = QRectF(x, l.extractDeck.top(), thisWidth, deckHeight);
             l.supplyBlock[static_cast<std::size_t>(*column.anchorSupply)] = static_cast<int>(l.blocks.size());
             l.extractBlock[static_cast<std::size_t>(*column.anchorExtract)] = static_cast<int>(l.blocks.size());
             l.blocks.push_back(b);
         } else {
             // Supply blocks start at the column's upstream (left) end, extract blocks
             // at theirs (right); what is left over is plain casing.
-            auto place = [&](const std::vector<int>& list, const std::vector<Chain::Section>& path, PathKind kind) {
-                const double w = sum(list, path);
-                if (w <= 0.0)
+            auto place = [&](const std::vector<int>& list, const std::vector<Entry>& sizes,
+                             const std::vector<Chain::Section>& path, PathKind kind) {
+                const double natural = widthOf(sizes, perMetre) * shrink;
+                if (natural <= 0.0)
                     return;
-                const double stretch = std::min(columnWeights[c] / w, kMaxStretch);
+                const double stretch = std::min(thisWidth / natural, kMaxStretch);
                 double used = 0.0;
                 std::vector<double> widths;
-                for (int i : list) {
-                    widths.push_back(weightOf(unit, path[static_cast<std::size_t>(i)]) * stretch * perWeight);
+                for (const auto& e : sizes) {
+                    widths.push_back(e.width(perMetre) * shrink * stretch);
                     used += widths.back();
                 }
-                double cursor = kind == PathKind::Supply ? x : x + columnWidth - used;
+                double cursor = kind == PathKind::Supply ? x : x + thisWidth - used;
                 const QRectF& deck = kind == PathKind::Supply ? l.supplyDeck : l.extractDeck;
                 for (std::size_t k = 0; k < list.size(); ++k) {
                     Block b;
@@ -251,10 +320,10 @@ UnitDrawing::Layout UnitDrawing::computeLayout() const
                     cursor += widths[k];
                 }
             };
-            place(column.supply, supply, PathKind::Supply);
-            place(column.extract, extract, PathKind::Extract);
+            place(column.supply, entries[c].supply, supply, PathKind::Supply);
+            place(column.extract, entries[c].extract, extract, PathKind::Extract);
         }
-        x += columnWidth;
+        x += thisWidth;
     }
     return l;
 }
@@ -451,21 +520,22 @@ void UnitDrawing::paintEvent(QPaintEvent*)
             return ip ? QStringLiteral("%1 in").arg(toMillimetres(v) / 25.4, 0, 'f', 1)
                       : QStringLiteral("%1 mm").arg(toMillimetres(v), 0, 'f', 0);
         };
-        const QString summary =
-            tr("Figures for case \"%1\": duty of coils and heaters, heat recovered, fan pressure rise, Δp pressure "
-               "drop.   Deck inside %2 wide × %3 high; unit length %4.")
-                .arg(QString::fromStdString(c.caseName), length(s.width), length(s.height), length(s.unitLength));
-        p.drawText(line1, Qt::AlignLeft | Qt::AlignVCenter, fm.elidedText(summary, Qt::ElideRight, line1.width()));
-        int warnings = 0;
+        const QString legend = tr("Figures for case \"%1\": duty of coils and heaters, heat recovered, fan "
+                                  "pressure rise, Δp pressure drop of the section.")
+                                   .arg(QString::fromStdString(c.caseName));
+        p.drawText(line1, Qt::AlignLeft | Qt::AlignVCenter, fm.elidedText(legend, Qt::ElideRight, line1.width()));
+        int attention = 0;
         for (const auto& f : c.findings)
             if (f.severity != Severity::Info)
-                ++warnings;
-        if (!c.findings.empty()) {
-            const QString findings = tr("%n finding(s) in this case, %1 needing attention: see the Findings tab.",
-                                        nullptr, static_cast<int>(c.findings.size()))
-                                         .arg(warnings);
-            p.drawText(line2, Qt::AlignLeft | Qt::AlignVCenter, fm.elidedText(findings, Qt::ElideRight, line2.width()));
-        }
+                ++attention;
+        QString second = tr("Deck inside: %1 wide, %2 high. Unit length %3.")
+                             .arg(length(s.width), length(s.height), length(s.unitLength));
+        if (!c.findings.empty())
+            second += QLatin1String("   ")
+                      + tr("Findings in this case: %1, %2 needing attention (see the Findings tab).")
+                            .arg(c.findings.size())
+                            .arg(attention);
+        p.drawText(line2, Qt::AlignLeft | Qt::AlignVCenter, fm.elidedText(second, Qt::ElideRight, line2.width()));
     } else {
         p.setPen(QColor(0xd0, 0x30, 0x30));
         const QString message = tr("Not computed: %1").arg(m_document->computeError());
@@ -574,10 +644,13 @@ void UnitDrawing::paintBlock(QPainter& p, const Block& b) const
 
     const QString id = QString::fromStdString(b.id);
     if (b.spansBoth) {
-        SectionSymbol::paintCoupled(p, symbolArea(b.supplyPart), symbolArea(b.extractPart), symbol, colours, true);
+        // The id and the supply-side figure on top, the extract-side figure at the
+        // foot; the symbol spans the decks between them.
+        const QRectF supplyArea = b.supplyPart.adjusted(4.0, 2.0 * lineHeight + 6.0, -4.0, 0.0);
+        const QRectF extractArea = b.extractPart.adjusted(4.0, 0.0, -4.0, -lineHeight - 5.0);
+        SectionSymbol::paintCoupled(p, supplyArea, extractArea, symbol, colours, true);
         textTop(b.supplyPart, id, idFont, fmId);
-        textBottom(b.supplyPart, keyFigure(PathKind::Supply, b.id));
-        textTop(b.extractPart, id, idFont, fmId);
+        textTop(b.supplyPart.translated(0.0, lineHeight), keyFigure(PathKind::Supply, b.id), small, fmSmall);
         textBottom(b.extractPart, keyFigure(PathKind::Extract, b.id));
     } else {
         const PathKind path = b.supplyIndex ? PathKind::Supply : PathKind::Extract;
@@ -756,19 +829,26 @@ void UnitDrawing::dropEvent(QDropEvent* event)
 {
     m_marker.reset();
     update();
-    const auto deck = deckAt(event->position().y());
     const QByteArray payload = event->mimeData()->data(QString::fromLatin1(sectionMimeType()));
     bool ok = false;
     const int entry = payload.toInt(&ok);
+    if (ok && dropSection(entry, event->position())) {
+        event->acceptProposedAction();
+        setFocus(Qt::OtherFocusReason);
+    }
+}
+
+bool UnitDrawing::dropSection(int catalogueEntry, const QPointF& point)
+{
+    const auto deck = deckAt(point.y());
     const auto& entries = SectionCatalog::entries();
-    if (!deck || !ok || entry < 0 || entry >= static_cast<int>(entries.size()))
-        return;
-    const int gap = insertionIndexAt(*deck, event->position().x());
+    if (!deck || catalogueEntry < 0 || catalogueEntry >= static_cast<int>(entries.size()))
+        return false;
+    const int gap = insertionIndexAt(*deck, point.x());
     m_selectedPath = *deck;
     m_document->undoStack()->push(
-        new AddSectionCommand(m_document, entries[static_cast<std::size_t>(entry)], *deck, gap));
-    event->acceptProposedAction();
-    setFocus(Qt::OtherFocusReason);
+        new AddSectionCommand(m_document, entries[static_cast<std::size_t>(catalogueEntry)], *deck, gap));
+    return true;
 }
 
 } // namespace Airwright::Ui

@@ -762,9 +762,13 @@ HumidityRatio humidityRatioFromWetBulb(AbsoluteTemperature t, AbsoluteTemperatur
     const double twbC = std::min(twb, tC);
     checkedSatHumidityRatio(twbC, satPressure(twbC), p);
     const double w = detail::humidityRatioFromWetBulb(tC, twbC, p);
-    if (!(w >= 0.0)) {
-        // Below the wet bulb of perfectly dry air the relation gives W < 0.
+    if (!(w >= 0.0)) [[unlikely]] {
+        // Below the wet bulb of perfectly dry air the relation gives W < 0. Within
+        // 1e-9 K of it (the tolerance of the other temperature comparisons, so that
+        // the solver's own wet bulb of dry air reads back) it is dry air.
         const double lowest = detail::wetBulb(tC, 0.0, p);
+        if (twbC >= lowest - kTemperatureTolerance)
+            return kilogramsPerKilogram(0.0);
         throw InputError("wet-bulb temperature", twb, "°C",
                          formatFixed(lowest, 2) + " .. " + formatFixed(tC, 2) + " °C (dry air .. saturated)");
     }

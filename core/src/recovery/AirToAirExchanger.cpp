@@ -64,10 +64,10 @@ struct WarmOutcome {
     double b = 1.0;
 };
 
-// warmDewPoint: of the warm inlet, C (computed once per evaluation, shared with
-// the frost margin).
-template <class Rate>
-WarmOutcome coolWarmStream(const Side& warm, double tColdIn, double warmDewPoint, Rate rate)
+// warmDewPoint(): of the warm inlet, C (computed at most once per evaluation,
+// shared with the frost margin).
+template <class Rate, class DewPoint>
+WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewPoint, Rate rate)
 {
     const double cw = warm.capacity();
     const double qDry = rate(1.0);
@@ -116,7 +116,7 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, double warmDewPoint
         lo = tDry;
         fLo = gDry;
         // A saturated inlet has its dew point at (or by rounding just above) t_in.
-        hi = std::min(warmDewPoint, warm.t);
+        hi = std::min(warmDewPoint(), warm.t);
         fHi = qDry - cw * (warm.t - hi); // b = 1 at the dew point: no rate call needed
     }
     const double t = hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance).x;
@@ -235,7 +235,7 @@ struct AirToAirExchanger::CoreOutcome {
     std::optional<RunAroundLoopState> loop;
 };
 
-AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingPoint& point) const
+AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingPoint& point, bool frostFigures) const
 {
     const ExchangerKind kind = m_rating.kind;
     const double maxFlow = kMaxFlowOverRated * m_ratedMassFlow;
@@ -283,15 +283,19 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
     const double cWarm = warm.capacity(), cCold = cold.capacity();
     // Plates and loops: the warm stream's vapour pressure and dew point serve both
     // the wet-surface solve and the frost margin.
-    double warmPw = 0.0, warmDew = 0.0;
-    if (!isRotary(kind) && ms > 0.0 && dT > 0.0) {
-        warmPw = raw::vapourPressureFromHumidityRatio(warm.w, warm.p);
-        if (warmPw > 0.0)
+    const double warmPw = raw::vapourPressureFromHumidityRatio(warm.w, warm.p);
+    double warmDew = 0.0;
+    bool warmDewKnown = false;
+    const auto warmDewPoint = [&] {
+        if (!warmDewKnown) {
             warmDew = raw::dewPointFromVapourPressure(warmPw);
-    }
+            warmDewKnown = true;
+        }
+        return warmDew;
+    };
     // Kelvin of the coldest surface above min(0 C, dew/frost point of the warm stream).
     const auto surfaceMargin = [&](double tSurface) {
-        const double limit = warmPw > 0.0 ? std::min(0.0, warmDew) : 0.0;
+        const double limit = warmPw > 0.0 ? std::min(0.0, warmDewPoint()) : 0.0;
         return tSurface - limit;
     };
 
@@ -308,7 +312,7 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
             };
             const double epsCminCold = coil(uaCold, cCold);
             auto rate = [&](double b) { return dT / (1.0 / coil(b * uaWarm, b * cWarm) + 1.0 / epsCminCold - 1.0 / cf); };
-            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDew, rate);
+            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDewPoint, rate);
             q = w.q;
             tFluidIntoWarmCoil = warm.t - q / coil(w.b * uaWarm, w.b * cWarm);
             const double tColdOut = cold.t + q / cCold;
@@ -317,8 +321,10 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
             (extractWarm ? condE : condS) = w.condensate;
             (extractWarm ? tsOut : teOut) = tColdOut;
             surface = tFluidIntoWarmCoil;
-            frost = Kernels::surfaceFrosts(surface, warmPw);
-            margin = surfaceMargin(surface);
+            if (frostFigures) {
+                frost = Kernels::surfaceFrosts(surface, warmPw);
+                margin = surfaceMargin(surface);
+            }
         }
         const double tFluidWarm = tFluidIntoWarmCoil + q / cf;
         o.loop = RunAroundLoopState{kilogramsPerSecond(cf / cp),
@@ -337,20 +343,22 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
                                               kCrossCounterFlowPasses)
                        * cmin * dT;
             };
-            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDew, rate);
+            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDewPoint, rate);
             (extractWarm ? teOut : tsOut) = w.tOut;
             (extractWarm ? weOut : wsOut) = w.wOut;
             (extractWarm ? condE : condS) = w.condensate;
             (extractWarm ? tsOut : teOut) = cold.t + w.q / cCold;
-            // Cold corner with the converged wet-side augmentation.
-            const double cw = w.b * cWarm, haW = w.b * haWarm;
-            const double ua = 1.0 / (1.0 / haW + 1.0 / haCold);
-            const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
-            surface = Kernels::coldCornerSurface(arrangement, cold.t, warm.t, w.tOut,
-                                                 std::min(ua / cmin, kMaxNtu), cmin / cmax, cw <= cCold,
-                                                 haCold / (haCold + haW));
-            frost = Kernels::surfaceFrosts(surface, warmPw);
-            margin = surfaceMargin(surface);
+            if (frostFigures) {
+                // Cold corner with the converged wet-side augmentation.
+                const double cw = w.b * cWarm, haW = w.b * haWarm;
+                const double ua = 1.0 / (1.0 / haW + 1.0 / haCold);
+                const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
+                surface = Kernels::coldCornerSurface(arrangement, cold.t, warm.t, w.tOut,
+                                                     std::min(ua / cmin, kMaxNtu), cmin / cmax, cw <= cCold,
+                                                     haCold / (haCold + haW));
+                frost = Kernels::surfaceFrosts(surface, warmPw);
+                margin = surfaceMargin(surface);
+            }
         }
     } else { // rotors
         if (ms > 0.0) {
@@ -385,7 +393,7 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
             o.supplyClampNeeded = wsOut > raw::satHumidityRatio(tsOut, supIn.p);
             o.extractClampNeeded = weOut > raw::satHumidityRatio(teOut, extIn.p);
             surface = cold.t;
-            if (dT > 0.0 && cold.t < 0.0) {
+            if (frostFigures && dT > 0.0 && cold.t < 0.0) {
                 const double wEff = warm.w - epsW * (warm.w - cold.w);
                 const double excess = Kernels::mixingLineSupersaturation(cold.t, cold.w, warm.t, wEff, cold.p);
                 frost = excess > 0.0;
@@ -408,7 +416,13 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
 
 AirToAirExchanger::ControlFigures AirToAirExchanger::controlFigures(const ExchangerOperatingPoint& point) const
 {
-    const CoreOutcome o = core(point);
+    return figures(point, true);
+}
+
+AirToAirExchanger::ControlFigures AirToAirExchanger::figures(const ExchangerOperatingPoint& point,
+                                                             bool frostFigures) const
+{
+    const CoreOutcome o = core(point, frostFigures);
     double tSup = o.tsOut;
     bool exact = !o.supplyClampNeeded;
     if (o.ms <= 0.0) {
@@ -431,7 +445,7 @@ AirToAirExchanger::ControlFigures AirToAirExchanger::controlFigures(const Exchan
 ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& point) const
 {
     const ExchangerKind kind = m_rating.kind;
-    CoreOutcome o = core(point);
+    CoreOutcome o = core(point, true);
     const double msTotal = o.msTotal, ms = o.ms, me = o.me;
 
     // Outlet states; a supersaturated rotor outlet is brought back to saturation.
@@ -519,7 +533,7 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
     };
     auto at = [&](double c) { return evaluate(pointAt(c)); };
     // Only the supply outlet temperature matters inside the solve.
-    auto tOutAt = [&](double c) { return toCelsius(controlFigures(pointAt(c)).supplyOutlet); };
+    auto tOutAt = [&](double c) { return toCelsius(figures(pointAt(c), false).supplyOutlet); };
     const double tIn = toCelsius(point.supplyInlet.dryBulb());
     const double target = toCelsius(setpoint);
     checkRange("supply temperature setpoint", target, Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC, "C",

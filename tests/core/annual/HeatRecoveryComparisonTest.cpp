@@ -140,8 +140,9 @@ TEST(AnnualHeatRecoveryComparison, RankingIsOrderedAndExplained)
         EXPECT_EQ(r.ranking[i].rank, static_cast<int>(i) + 1);
         EXPECT_FALSE(r.ranking[i].reason.empty());
         EXPECT_NEAR(r.ranking[i].netBenefit, find(r, r.ranking[i].key).netBenefit, 1e-9);
-        if (i > 0)
+        if (i > 0) {
             EXPECT_GE(r.ranking[i - 1].netBenefit, r.ranking[i].netBenefit);
+        }
     }
 }
 
@@ -180,8 +181,15 @@ TEST(AnnualHeatRecoveryComparison, BinTableRunsTheSameComparison)
     ASSERT_TRUE(bins);
     EXPECT_EQ(bins->climate.method, ClimateMethod::Bins);
     EXPECT_TRUE(bins->sensitivity.empty());
-    // The same winner as the hourly comparison on the same climate.
-    EXPECT_EQ(bins->ranking.front().key, demoComparison().ranking.front().key);
+    // The same options and, option by option, the hourly comparison's net saving
+    // within 1 % of the heating without heat recovery (the bin method's tolerance in
+    // AnnualSimulationTest). Close options may swap places: the two wheels differ by
+    // less than that on the demo.
+    const auto& hourly = demoComparison();
+    const double scale = toMegawattHours(find(hourly, "none").energy.heating);
+    ASSERT_EQ(bins->options.size(), hourly.options.size());
+    for (const auto& o : bins->options)
+        EXPECT_NEAR(toMegawattHours(o.netSaving), toMegawattHours(find(hourly, o.key).netSaving), 0.01 * scale) << o.key;
 }
 
 TEST(AnnualHeatRecoveryComparison, StopsWhenAsked)

@@ -123,6 +123,11 @@ struct TableRow {
 
 class AnnualExchangerTable : public ::testing::TestWithParam<TableRow> {};
 
+std::string tableRowName(const ::testing::TestParamInfo<TableRow>& row)
+{
+    return row.param.option;
+}
+
 } // namespace
 
 // Tabulated exchanger (1 K grid, the default) against the exchanger evaluated at
@@ -163,7 +168,7 @@ INSTANTIATE_TEST_SUITE_P(Options, AnnualExchangerTable,
                          ::testing::Values(TableRow{"plate_cross_flow"}, TableRow{"plate_counter_flow"},
                                            TableRow{"rotary_non_hygroscopic"}, TableRow{"rotary_hygroscopic"},
                                            TableRow{"run_around_loop"}),
-                         [](const ::testing::TestParamInfo<TableRow>& info) { return std::string(info.param.option); });
+                         tableRowName);
 
 TEST(AnnualHourModel, RejectsWhatItCannotModel)
 {

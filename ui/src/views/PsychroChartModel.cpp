@@ -363,16 +363,28 @@ QVector<std::pair<QPointF, QPointF>> PsychroChartModel::segmentsOf(const QString
 
 QString PsychroChartModel::describe(const Process& process, const StatePoint& point, const UnitSystem& units) const
 {
+    return describe(process, QVector<StatePoint>{point}, units);
+}
+
+QString PsychroChartModel::describe(const Process& process, const QVector<StatePoint>& samePlace,
+                                    const UnitSystem& units) const
+{
+    if (samePlace.isEmpty())
+        return {};
+    const StatePoint& point = samePlace.front();
     const bool ip = units.system() == UnitSystem::System::IP;
     const QString pathName =
         point.path == Core::Chain::PathKind::Supply ? QStringLiteral("supply air") : QStringLiteral("extract air");
-    const QString where = point.atInlet ? QStringLiteral("entering %1").arg(point.sectionId)
-                                        : QStringLiteral("leaving %1").arg(point.sectionId);
+    QStringList where;
+    for (const auto& p : samePlace)
+        where.push_back(p.atInlet ? QStringLiteral("entering %1").arg(p.sectionId)
+                                  : QStringLiteral("leaving %1").arg(p.sectionId));
     const QString h = QStringLiteral("%1 %2").arg(number(enthalpyToDisplay(point.enthalpyKJkg, ip), 1),
                                                   ip ? QStringLiteral("Btu/lb") : QStringLiteral("kJ/kg"));
     return QStringLiteral("%1, %2\n%3\nt %4   RH %5 %\nW %6   h %7")
-        .arg(process.caseName, pathName, where, units.format(Kind::Temperature, point.temperatureC),
-             number(point.relativeHumidityPct, 0), units.format(Kind::HumidityRatio, point.humidityRatioGkg), h);
+        .arg(process.caseName, pathName, where.join(QStringLiteral(", ")),
+             units.format(Kind::Temperature, point.temperatureC), number(point.relativeHumidityPct, 0),
+             units.format(Kind::HumidityRatio, point.humidityRatioGkg), h);
 }
 
 } // namespace Airwright::Ui

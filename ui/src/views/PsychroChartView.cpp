@@ -293,9 +293,19 @@ QString PsychroChartView::tipAt(const QPoint& plotPixel) const
     const Hit hit = hitAt(plotPixel);
     if (hit.process < 0)
         return {};
+    // Sections that change only the pressure leave the state where it was: name
+    // every boundary of this path drawn on the same spot.
     const auto& process = m_model.processes()[hit.process];
-    const auto& point = (hit.extract ? process.extract : process.supply)[hit.point];
-    return m_model.describe(process, point, *m_units);
+    const auto& points = hit.extract ? process.extract : process.supply;
+    const QPointF at = points[hit.point].position;
+    QVector<PsychroChartModel::StatePoint> samePlace;
+    for (const auto& p : points) {
+        const double dx = m_plot->xAxis->coordToPixel(p.position.x()) - m_plot->xAxis->coordToPixel(at.x());
+        const double dy = m_plot->yAxis->coordToPixel(p.position.y()) - m_plot->yAxis->coordToPixel(at.y());
+        if (std::hypot(dx, dy) < 1.5)
+            samePlace.push_back(p);
+    }
+    return m_model.describe(process, samePlace, *m_units);
 }
 
 void PsychroChartView::onMouseMove(QMouseEvent* event)

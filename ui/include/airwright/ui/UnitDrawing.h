@@ -47,6 +47,9 @@ public:
     // The insertion index in `path` for a drop at x.
     int insertionIndexAt(Core::Chain::PathKind path, double x) const;
     std::optional<Place> placeAt(const QPointF& point) const;
+    // What a drop of a catalogue entry at `point` does: adds it to the deck under
+    // the point, where it lands. False when the point is on neither deck.
+    bool dropSection(int catalogueEntry, const QPointF& point);
 
     QSize sizeHint() const override;
     QSize minimumSizeHint() const override;

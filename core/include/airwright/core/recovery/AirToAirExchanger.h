@@ -87,7 +87,10 @@ public:
 
 private:
     struct CoreOutcome;
-    CoreOutcome core(const ExchangerOperatingPoint& point) const;
+    // frostFigures false: the cold-corner surface, frost risk and margin are left
+    // out (the setpoint control needs only the supply outlet).
+    CoreOutcome core(const ExchangerOperatingPoint& point, bool frostFigures) const;
+    ControlFigures figures(const ExchangerOperatingPoint& point, bool frostFigures) const;
     double conductancePerSide(double dryAirFlow) const;
     double coilConductance(double dryAirFlow) const;
 

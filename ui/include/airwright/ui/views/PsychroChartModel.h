@@ -96,6 +96,10 @@ public:
 
     // Tooltip text: case, path, boundary, then t, RH, W and h in the chosen units.
     QString describe(const Process& process, const StatePoint& point, const UnitSystem& units) const;
+    // The same for several boundaries of one path drawn on the same spot (sections
+    // that change only the pressure): all of them are named, the state of the first
+    // is shown.
+    QString describe(const Process& process, const QVector<StatePoint>& samePlace, const UnitSystem& units) const;
 
     // Enthalpy for display: kJ/kg (SI) or Btu/lb referred to dry air at 0 °F (IP).
     static double enthalpyToDisplay(double kJkg, bool ip);
