@@ -181,7 +181,7 @@ json reportJson(const Project::Project& project, const std::string& climateFile,
                          {"heat_price_factor", cell.heatPriceFactor},
                          {"ranking", cell.ranking}});
     json offsets = json::array();
-    for (const Ratio o : settings.roomHumidityOffsets)
+    for (const Ratio& o : settings.roomHumidityOffsets)
         offsets.push_back(toPercent(o));
     j["sensitivity"] = {{"room_rh_offsets_pct", settings.sensitivity ? offsets : json::array()},
                         {"heat_price_factors", settings.sensitivity ? json(settings.heatPriceFactors) : json::array()},
@@ -326,7 +326,7 @@ std::string CompareHrCommand::help() const
            "  --cooling-eer X       seasonal EER of the cold source (default 3.0)\n"
            "  --years N             evaluation period of the ranking (default 15)\n"
            "  --extra-cost K=V,...  extra cost per option key, e.g. plate_counter_flow=9000\n"
-           "                        (default: 0.6 .. 1.2 per m3/h of supply air, illustrative)\n"
+           "                        (default: 0.8 .. 2.0 per m3/h of supply air, illustrative)\n"
            "  --hours-per-day N     1 .. 24 (default 24)\n"
            "  --first-hour N        first operating hour of the day, 0 .. 23 (default 0)\n"
            "  --days-per-week N     1 .. 7, from Monday (default 7)\n"

@@ -2,7 +2,9 @@
 
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
+#include "airwright/core/checks/SfpCategory.h"
 #include "airwright/core/checks/UnitAssessment.h"
+#include "airwright/core/checks/VelocityClass.h"
 #include "airwright/core/chain/SectionFigures.h"
 
 #include <algorithm>

@@ -1,5 +1,6 @@
 #include "airwright/cli/CompareHrCommand.h"
 #include "airwright/cli/ExitCode.h"
+#include "airwright/core/InputError.h"
 
 #include <nlohmann/json.hpp>
 
@@ -61,11 +62,11 @@ TEST(CompareHrCommand, JsonFollowsTheContract)
     EXPECT_EQ(j["climate"]["method"], "hourly");
     EXPECT_NEAR(j["climate"]["hours"].get<double>(), 8760.0, 1e-9);
     ASSERT_EQ(j["options"].size(), 6u);
-    for (const auto& o : j["options"]) {
+    for (std::size_t i = 0; i < j["options"].size(); ++i) {
         for (const char* key : {"name", "kind", "effectiveness_t", "eta_t_1253", "dp_supply_Pa", "dp_extract_Pa",
                                 "recovered_heating_MWh", "recovered_cooling_MWh", "frost_protection_MWh", "frost_hours",
                                 "added_fan_MWh", "net_saving_MWh", "cost_saving", "co2_saving_t", "payback_years"})
-            EXPECT_TRUE(o.contains(key)) << o.value("name", "?") << " " << key;
+            EXPECT_TRUE(j["options"][i].contains(key)) << "option " << i << " " << key;
     }
     EXPECT_EQ(j["options"][0]["kind"], "none");
     EXPECT_TRUE(j["options"][0]["payback_years"].is_null());

@@ -106,7 +106,8 @@ TEST_F(UnitDrawingTest, DropInsertsWhereItLands)
     // What the drop handler does with the entry it reads from the drag's data.
     const auto& entries = SectionCatalog::entries();
     const auto silencer = std::find(entries.begin(), entries.end(), SectionCatalog::Entry::Silencer) - entries.begin();
-    EXPECT_FALSE(drawing->dropSection(static_cast<int>(silencer), QPointF(at.x(), 2.0))); // above the decks
+    const double aboveDecks = drawing->blockRect(PathKind::Supply, 0).top() - 30.0;
+    EXPECT_FALSE(drawing->dropSection(static_cast<int>(silencer), QPointF(at.x(), aboveDecks)));
     EXPECT_TRUE(drawing->dropSection(static_cast<int>(silencer), at));
     ASSERT_EQ(document.undoStack()->count(), 1);
     EXPECT_EQ(document.project().unit.extract[1].id, "silencer-2");

@@ -45,11 +45,11 @@ std::vector<HeatRecoveryOption> defaultHeatRecoveryOptions(VolumeFlow supplyDesi
 
     return {
         {"none", "no heat recovery", std::nullopt, 0.0},
-        {"plate_cross_flow", "plate, cross-flow", crossFlow, 0.6 * perM3h},
-        {"plate_counter_flow", "plate, counter-flow", counterFlow, 0.9 * perM3h},
-        {"rotary_non_hygroscopic", "rotary wheel, non-hygroscopic", wheel, 0.8 * perM3h},
-        {"rotary_hygroscopic", "rotary wheel, hygroscopic", enthalpyWheel, 1.0 * perM3h},
-        {"run_around_loop", "run-around coil loop", loop, 1.2 * perM3h},
+        {"plate_cross_flow", "plate, cross-flow", crossFlow, 0.8 * perM3h},
+        {"plate_counter_flow", "plate, counter-flow", counterFlow, 1.2 * perM3h},
+        {"rotary_non_hygroscopic", "rotary wheel, non-hygroscopic", wheel, 1.0 * perM3h},
+        {"rotary_hygroscopic", "rotary wheel, hygroscopic", enthalpyWheel, 1.3 * perM3h},
+        {"run_around_loop", "run-around coil loop", loop, 2.0 * perM3h},
     };
 }
 

@@ -29,6 +29,9 @@ namespace Airwright::Core::Chain {
 class CaseSolver {
 public:
     CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase, const UnitSizing& sizing);
+    // Couplings point into their own evaluator memories: never copied or moved.
+    CaseSolver(const CaseSolver&) = delete;
+    CaseSolver& operator=(const CaseSolver&) = delete;
     CaseResult run();
 
 private:

@@ -3,6 +3,8 @@
 #include "airwright/core/psychro/PsychroRaw.h"
 #include "airwright/ui/UnitSystem.h"
 
+#include <QStringList>
+
 #include <algorithm>
 #include <cmath>
 

@@ -18,8 +18,8 @@
 // Wheels are taken as sealed (EATR 0, OACF 1) so that leakage does not count as
 // recovery; the loop runs on 30 % propylene glycol with a pump of 30 W per
 // 1000 m3/h. Extra costs are illustrative, our own round figures per m3/h of
-// supply air (plate cross-flow 0.6, counter-flow 0.9, wheel 0.8, hygroscopic
-// wheel 1.0, loop 1.2): enter real quotes.
+// supply air (plate cross-flow 0.8, counter-flow 1.2, wheel 1.0, hygroscopic
+// wheel 1.3, loop 2.0, including the loop's piping and pump): enter real quotes.
 
 #include "airwright/core/Quantities.h"
 #include "airwright/core/recovery/HeatRecovery.h"
