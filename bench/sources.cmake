@@ -2,4 +2,5 @@ set(AIRWRIGHT_BENCH_SOURCES
     PsychroBench.cpp
     RecoveryBench.cpp
     ChainBench.cpp
+    AnnualBench.cpp
 )

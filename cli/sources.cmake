@@ -5,4 +5,8 @@ set(AIRWRIGHT_CLI_SOURCES
     src/ValidateCommand.cpp
     src/ComputeCommand.cpp
     src/ComputeReport.cpp
+    src/CsvWriter.cpp
+    src/ScheduleCsv.cpp
+    src/PointsCommand.cpp
+    src/CompareHrCommand.cpp
 )

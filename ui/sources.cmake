@@ -81,6 +81,7 @@ set(AIRWRIGHT_UI_SOURCES
 list(APPEND AIRWRIGHT_UI_SOURCES resources.qrc) # the program icon; GuiApplication initialises it
 set_target_properties(airwright_ui PROPERTIES AUTORCC ON)
 include("${CMAKE_CURRENT_LIST_DIR}/src/views/sources.cmake")
+include("${CMAKE_CURRENT_LIST_DIR}/src/export/sources.cmake")
 
 # Where the demo project lives in the source tree (ResourceLocator falls back to
 # paths next to the executable), and the version for Help > About.

@@ -2,10 +2,9 @@
 
 // The schedule command writes PDF with Qt, so it lives in ui. It is registered
 // when airwright-cli is linked to Airwright::Ui (app/CMakeLists.txt); a build
-// without the GUI has no ui headers on its include path and goes without it.
-#if __has_include("airwright/ui/export/ScheduleCommand.h")
+// without the GUI goes without it.
+#ifdef AIRWRIGHT_CLI_HAS_SCHEDULE
 #include "airwright/ui/export/ScheduleCommand.h"
-#define AIRWRIGHT_CLI_HAS_SCHEDULE 1
 #endif
 
 #include <iostream>

@@ -1,7 +1,9 @@
 #include "airwright/cli/CliApplication.h"
 
 #include "airwright/cli/ExitCode.h"
+#include "airwright/cli/CompareHrCommand.h"
 #include "airwright/cli/ComputeCommand.h"
+#include "airwright/cli/PointsCommand.h"
 #include "airwright/cli/StateCommand.h"
 #include "airwright/cli/ValidateCommand.h"
 #include "airwright/core/InputError.h"
@@ -17,6 +19,8 @@ CliApplication::CliApplication()
     addCommand(std::make_unique<StateCommand>());
     addCommand(std::make_unique<ValidateCommand>());
     addCommand(std::make_unique<ComputeCommand>());
+    addCommand(std::make_unique<PointsCommand>());
+    addCommand(std::make_unique<CompareHrCommand>());
 }
 
 CliApplication::~CliApplication() = default;

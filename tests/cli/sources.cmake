@@ -4,4 +4,7 @@ set(AIRWRIGHT_CLI_TEST_SOURCES
     cli/StateCommandTest.cpp
     cli/ValidateCommandTest.cpp
     cli/ComputeCommandTest.cpp
+    cli/ScheduleCsvTest.cpp
+    cli/PointsCommandTest.cpp
+    cli/CompareHrCommandTest.cpp
 )

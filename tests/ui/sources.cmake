@@ -11,3 +11,4 @@ set(AIRWRIGHT_UI_TEST_SOURCES
     ui/MainWindowTest.cpp
 )
 include("${CMAKE_CURRENT_LIST_DIR}/views/sources.cmake")
+include("${CMAKE_CURRENT_LIST_DIR}/export/sources.cmake")

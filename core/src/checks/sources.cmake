@@ -7,4 +7,5 @@ list(APPEND AIRWRIGHT_CORE_SOURCES
     src/checks/InternalSfp.cpp
     src/checks/RecoveryReferenceDrop.cpp
     src/checks/UnitAssessment.cpp
+    src/checks/MeasurementPoints.cpp
 )

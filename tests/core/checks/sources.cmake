@@ -5,4 +5,5 @@ list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
     core/checks/InternalSfpTest.cpp
     core/checks/RecoveryReferenceDropTest.cpp
     core/checks/UnitAssessmentTest.cpp
+    core/checks/MeasurementPointsTest.cpp
 )

@@ -10,6 +10,9 @@ QFont PdfStyle::font(Role role)
     // Glyph advances from the outlines, not snapped to device pixels, so text
     // measured for the layout is the text painted.
     f.setHintingPreference(QFont::PreferNoHinting);
+    // No ligatures: "fi" stays two letters, so the text copied or extracted
+    // from the PDF is the text we wrote (section ids like "supply-filter").
+    f.setStyleStrategy(QFont::PreferNoShaping);
     switch (role) {
     case Title:
         f.setPointSizeF(16.0);
