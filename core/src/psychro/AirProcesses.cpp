@@ -117,6 +117,8 @@ ProcessOutcome heatByDuty(const MoistAirState& inlet, Power duty, MassFlow dryAi
         throw InputError("heat duty", q, "W",
                          formatNumber(m * cp * (kMinTemperatureC - t1)) + " .. "
                              + formatNumber(m * cp * (kMaxTemperatureC - t1)) + " W (outlet -100 .. 200 °C)");
+    if (q >= 0.0) // heating at constant W moves away from saturation: no fog to settle
+        return unchanged(t2, w, inlet.pressure());
     return clampToSaturation(celsius(t2), inlet.humidityRatio(), inlet.pressure());
 }
 

@@ -34,15 +34,9 @@ MoistAirState MoistAirState::fromDryBulbDewPoint(AbsoluteTemperature tdb, Absolu
 
 MoistAirState MoistAirState::fromDryBulbHumidityRatio(AbsoluteTemperature tdb, HumidityRatio w, Pressure p)
 {
-    // relativeHumidityFromHumidityRatio validates t, W (against saturation) and p;
-    // a W within the rounding tolerance above saturation is stored as saturated.
-    relativeHumidityFromHumidityRatio(tdb, w, p);
-    const double pws = toPascals(Psychro::saturationPressure(tdb));
-    const double pv = toPascals(p);
-    double wv = toKilogramsPerKilogram(w);
-    if (pws < pv)
-        wv = std::min(wv, detail::humidityRatioFromVapourPressure(pws, pv));
-    return MoistAirState(tdb, kilogramsPerKilogram(wv), p);
+    // Validates t, W (against saturation) and p; a W within the rounding
+    // tolerance above saturation is stored as saturated.
+    return MoistAirState(tdb, checkedHumidityRatioAt(tdb, w, p), p);
 }
 
 MoistAirState MoistAirState::fromEnthalpyHumidityRatio(SpecificEnthalpy h, HumidityRatio w, Pressure p)

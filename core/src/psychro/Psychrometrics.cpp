@@ -717,6 +717,13 @@ Ratio relativeHumidityFromHumidityRatio(AbsoluteTemperature t, HumidityRatio w, 
     return fraction(std::min(1.0, detail::vapourPressureFromHumidityRatio(wv, p) / pws));
 }
 
+HumidityRatio checkedHumidityRatioAt(AbsoluteTemperature t, HumidityRatio w, Pressure pressure)
+{
+    const double tC = checkedCelsius(t, "dry-bulb temperature");
+    const double p = checkedPressure(pressure);
+    return kilogramsPerKilogram(checkedUnsaturated(tC, checkedHumidityRatio(w), satPressure(tC), p));
+}
+
 AbsoluteTemperature dewPointFromVapourPressure(Pressure vapourPressure)
 {
     return celsius(detail::dewPointFromVapourPressure(checkedDewPointVapourPressure(toPascals(vapourPressure))));

@@ -1,4 +1,5 @@
 #include "airwright/core/recovery/AirToAirExchanger.h"
+#include "airwright/core/PowerLaw.h"
 
 #include "EffectivenessKernels.h"
 #include "FrostKernels.h"
@@ -211,13 +212,13 @@ bool AirToAirExchanger::exceedsTypicalEfficiency() const
 
 double AirToAirExchanger::conductancePerSide(double dryAirFlow) const
 {
-    return m_ratedSideConductance * std::pow(dryAirFlow / m_ratedMassFlow, m_htExponent);
+    return m_ratedSideConductance * powerLaw(dryAirFlow / m_ratedMassFlow, m_htExponent);
 }
 
 double AirToAirExchanger::coilConductance(double dryAirFlow) const
 {
     // The air side dominates a finned coil's resistance; the loop flow is constant.
-    return m_ratedCoilConductance * std::pow(dryAirFlow / m_ratedMassFlow, m_htExponent);
+    return m_ratedCoilConductance * powerLaw(dryAirFlow / m_ratedMassFlow, m_htExponent);
 }
 
 // Everything of one evaluation except the outlet states and pressure drops, in
@@ -477,7 +478,7 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
         if (m <= 0.0)
             return pascals(0.0);
         // dp ~ rho^(x-1) V^x = m^x / rho (x = 1 laminar, 2 turbulent).
-        return rated * (std::pow(m / m_ratedMassFlow, m_dpExponent) * kReferenceAirDensity
+        return rated * (powerLaw(m / m_ratedMassFlow, m_dpExponent) * kReferenceAirDensity
                         / toKilogramsPerCubicMetre(in.density()));
     };
 

@@ -1,4 +1,5 @@
 #include "airwright/core/sections/Fan.h"
+#include "airwright/core/PowerLaw.h"
 
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
@@ -48,7 +49,7 @@ SectionOutcome Fan::compute(const AirStream& inlet, const SectionContext& contex
     detail.electricPower = airPower / detail.overallEfficiency;
     detail.specificFanPower = detail.electricPower / q;
     if (kFactor) // q = k sqrt(dp): dp = (q / k)^2 with q in m3/h
-        detail.inletRingPressure = pascals(std::pow(toCubicMetresPerHour(q) / *kFactor, 2.0));
+        detail.inletRingPressure = pascals(powerLaw(toCubicMetresPerHour(q) / *kFactor, 2.0));
 
     // Heat to the air: all the electric input with the motor in the airstream, else
     // the shaft power (the impeller's losses end up in the air either way).

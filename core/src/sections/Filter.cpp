@@ -1,4 +1,5 @@
 #include "airwright/core/sections/Filter.h"
+#include "airwright/core/PowerLaw.h"
 
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
@@ -144,7 +145,7 @@ SectionOutcome Filter::compute(const AirStream& inlet, const SectionContext& con
 {
     const VolumeFlow nominal = nominalFlow.value_or(context.pathDesignFlow);
     const double ratio = nominal.value() > 0.0 ? inlet.volumeFlow().value() / nominal.value() : 1.0;
-    const double scale = std::pow(ratio, flowExponent);
+    const double scale = powerLaw(ratio, flowExponent);
 
     detail.group = group;
     detail.efficiency = efficiency;

@@ -1,4 +1,5 @@
 #include "airwright/core/sections/SectionOutcome.h"
+#include "airwright/core/PowerLaw.h"
 
 #include "airwright/core/psychro/AirProcesses.h"
 
@@ -23,7 +24,7 @@ Pressure scaledPressureDrop(Pressure ratedDrop, Velocity ratedVelocity, Velocity
 {
     if (ratedVelocity.value() <= 0.0)
         return ratedDrop;
-    return ratedDrop * std::pow(velocity.value() / ratedVelocity.value(), exponent);
+    return ratedDrop * powerLaw(velocity.value() / ratedVelocity.value(), exponent);
 }
 
 } // namespace Airwright::Core::Sections

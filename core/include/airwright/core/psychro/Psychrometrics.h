@@ -28,6 +28,9 @@ HumidityRatio saturationHumidityRatio(AbsoluteTemperature t, Pressure pressure);
 // Relative humidity as a fraction 0..1 (Ratio).
 HumidityRatio humidityRatioFromRelativeHumidity(AbsoluteTemperature t, Ratio rh, Pressure pressure);
 Ratio relativeHumidityFromHumidityRatio(AbsoluteTemperature t, HumidityRatio w, Pressure pressure);
+// Validates a state as relativeHumidityFromHumidityRatio does and returns W, a W
+// within the rounding tolerance above saturation clamped to saturation.
+HumidityRatio checkedHumidityRatioAt(AbsoluteTemperature t, HumidityRatio w, Pressure pressure);
 
 // Dew point (frost point below the triple point): inverse of saturationPressure.
 // The vapour pressure must lie within pws(-100 C) .. pws(200 C): perfectly dry air

@@ -1,0 +1,24 @@
+#pragma once
+// ratio^exponent for the flow scaling laws (pressure drop ~ q^x, heat transfer
+// coefficient ~ m^n). A chain pass evaluates dozens of them and std::pow is its
+// slowest call, while most exponents are 1 or 2 and most ratios are exactly 1
+// at design flow; those cases are exact without pow.
+
+#include <cmath>
+
+namespace Airwright::Core {
+
+inline double powerLaw(double ratio, double exponent)
+{
+    if (ratio == 1.0 || exponent == 0.0)
+        return 1.0;
+    if (exponent == 2.0)
+        return ratio * ratio;
+    if (exponent == 1.0)
+        return ratio;
+    if (exponent == 0.5)
+        return std::sqrt(ratio);
+    return std::pow(ratio, exponent);
+}
+
+} // namespace Airwright::Core
