@@ -309,7 +309,7 @@ std::string CompareHrCommand::help() const
            "                               [options]\n"
            "\n"
            "Compares no heat recovery, plate cross-flow, plate counter-flow, non-hygroscopic and\n"
-           "hygroscopic wheels and a run-around loop (typical datasheet values, sized to the unit)\n"
+           "hygroscopic wheels and a run-around loop (datasheet-style values of our own, sized to the unit)\n"
            "over a year, for the unit of the project FILE: energy recovered, frost, fan energy,\n"
            "net saving, cost, CO2 and payback, a ranking with reasons and a sensitivity table.\n"
            "The project file has no annual section yet: prices, schedule and extra costs come\n"

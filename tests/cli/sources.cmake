@@ -7,4 +7,5 @@ set(AIRWRIGHT_CLI_TEST_SOURCES
     cli/ScheduleCsvTest.cpp
     cli/PointsCommandTest.cpp
     cli/CompareHrCommandTest.cpp
+    cli/BadInputTest.cpp
 )

@@ -5,7 +5,7 @@
 namespace Airwright::Core::Annual {
 
 namespace {
-constexpr std::size_t kSummerHolidayFirstDay = 210; // 29 July in a normal year
+constexpr std::size_t kSummerHolidayFirstDay = 210; // counted from 0: 30 July in a normal year
 } // namespace
 
 const char* offHoursModeKey(OffHoursMode mode)

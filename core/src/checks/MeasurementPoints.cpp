@@ -118,7 +118,9 @@ void addGroupedSetpoints(MeasurementPoint& p, const std::string& key, const std:
 {
     std::vector<std::pair<Q, std::string>> groups;
     for (const auto& [name, value] : perCase) {
-        auto it = std::find_if(groups.begin(), groups.end(), [&](const auto& g) { return g.first == value; });
+        // A named reference: clang before 16 cannot capture a structured binding.
+        const auto& caseValue = value;
+        auto it = std::find_if(groups.begin(), groups.end(), [&](const auto& g) { return g.first == caseValue; });
         if (it == groups.end())
             groups.push_back({value, name});
         else

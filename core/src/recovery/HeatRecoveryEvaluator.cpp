@@ -42,13 +42,17 @@ bool sameStream(const Sections::AirStream& a, const Sections::AirStream& b)
     return a.state == b.state && a.dryAir.value() == b.dryAir.value();
 }
 
-Sections::AirStream mixStreams(const Sections::AirStream& a, const Sections::AirStream& b)
+// Mixing the crossing flows back in can fog (cold purge air into humid exhaust, or
+// humid transferred extract air into cold supply): the water that drops out is
+// added to fog, so that it leaves as condensate instead of vanishing.
+Sections::AirStream mixStreams(const Sections::AirStream& a, const Sections::AirStream& b, MassFlow& fog)
 {
     if (b.dryAir.value() <= 0.0)
         return a;
     if (a.dryAir.value() <= 0.0)
         return b;
     const auto mixed = Psychro::mix(a.state, a.dryAir, b.state, b.dryAir);
+    fog += (a.dryAir + b.dryAir) * mixed.condensate;
     return {mixed.outlet, a.dryAir + b.dryAir};
 }
 
@@ -290,8 +294,9 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
     const Sections::AirStream coreSupplyOut{performance.supplyOutlet, supplyCore};
     const Sections::AirStream coreExtractOut{performance.extractOutlet, extractCore};
     out.extractIn = extractIn;
-    out.supplyOut = mixStreams(coreSupplyOut, {extractIn.state, transfer});
-    out.extractOut = mixStreams(coreExtractOut, {point.supplyInlet, purge});
+    MassFlow fog;
+    out.supplyOut = mixStreams(coreSupplyOut, {extractIn.state, transfer}, fog);
+    out.extractOut = mixStreams(coreExtractOut, {point.supplyInlet, purge}, fog);
     out.supplyPressureDrop = performance.supplyPressureDrop;
     out.extractPressureDrop = performance.extractPressureDrop;
     out.rotorSpeedRatio = point.rotorSpeedRatio;
@@ -304,7 +309,7 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
     d.regulationThermalEfficiency = m_regulationEfficiency;
     d.recovered = performance.totalHeat;
     d.bypassFraction = point.bypassFraction;
-    d.condensate = performance.extractCondensate + performance.supplyCondensate;
+    d.condensate = performance.extractCondensate + performance.supplyCondensate + fog;
     d.leakage = {m_spec.exhaustAirTransfer, m_spec.outdoorAirCorrection};
     d.cleanExtractPressureDrop = performance.extractPressureDrop;
     d.frostAlarmPressureDrop = performance.extractPressureDrop + pascals(kFrostAlarmRisePa);

@@ -11,7 +11,7 @@
 //    weekday of 1 January being firstWeekday (0 Monday .. 6 Sunday), and
 //  - it is not in a holiday week. Holiday weeks are whole 7-day blocks: the last
 //    ceil(n / 2) weeks of the year (around the turn of the year) and floor(n / 2)
-//    weeks from day 210 (29 July in a normal year, midsummer). Our own rule.
+//    weeks from day 210 counted from 0 (30 July in a normal year, midsummer). Our own rule.
 
 #include "airwright/core/Quantities.h"
 

@@ -28,7 +28,7 @@ struct HeatRecoveryDetail {
     Ratio regulationThermalEfficiency;              // Regulation (EU) 1253/2014 definition
     Power recovered;                                // to the supply air (+ heats it)
     Ratio bypassFraction;
-    MassFlow condensate;                            // extract side
+    MassFlow condensate;                            // both sides, with fog from the crossing flows
     FrostAssessment frost;
     LeakageFigures leakage;
     Pressure cleanExtractPressureDrop;              // at the actual flow: frost detection base
