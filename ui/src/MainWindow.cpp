@@ -23,11 +23,14 @@
 #include "airwright/ui/UnitPanel.h"
 #include "airwright/ui/UnitSystem.h"
 #include "airwright/ui/views/FindingsView.h"
+#include "airwright/ui/views/HeatRecoveryComparisonView.h"
 #include "airwright/ui/views/PressureProfileView.h"
 #include "airwright/ui/views/PsychroChartView.h"
+#include "airwright/ui/export/ScheduleExport.h"
 #include "airwright/ui/views/ScheduleView.h"
 
 #include <QAction>
+#include <QDir>
 #include <QActionGroup>
 #include <QApplication>
 #include <QCloseEvent>
@@ -141,15 +144,18 @@ void MainWindow::createPanels()
     auto* chart = new PsychroChartView(m_document, m_units, m_views);
     auto* profile = new PressureProfileView(m_document, m_units, m_views);
     auto* schedule = new ScheduleView(m_document, m_units, m_views);
-    auto* findings = new FindingsView(m_document, m_views);
+    auto* findings = new FindingsView(m_document, m_units, m_views);
+    auto* comparison = new HeatRecoveryComparisonView(m_document, m_units, m_views);
     chart->setObjectName(QStringLiteral("psychrometric-chart"));
     profile->setObjectName(QStringLiteral("pressure-profile"));
     schedule->setObjectName(QStringLiteral("section-schedule"));
     findings->setObjectName(QStringLiteral("findings"));
+    comparison->setObjectName(QStringLiteral("heat-recovery-comparison"));
     m_views->addTab(chart, tr("Psychrometric chart"));
     m_views->addTab(profile, tr("Pressure profile"));
     m_views->addTab(schedule, tr("Section schedule"));
     m_views->addTab(findings, tr("Findings"));
+    m_views->addTab(comparison, tr("Heat recovery comparison"));
     connect(m_unitPanel, &UnitPanel::caseIndexChanged, this, [profile, schedule, this](int index) {
         profile->setCaseIndex(index);
         schedule->setCaseIndex(index);
@@ -230,6 +236,14 @@ void MainWindow::createActions()
     m_saveAsAction = new QAction(tr("Save &As..."), this);
     m_saveAsAction->setShortcut(QKeySequence::SaveAs);
     connect(m_saveAsAction, &QAction::triggered, this, [this] { saveAs(); });
+    m_exportAction = new QAction(tr("&Export Section Schedule..."), this);
+    m_exportAction->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_E));
+    m_exportAction->setStatusTip(tr("Write the section schedule as PDF (A4 or Letter, in the display units) or CSV"));
+    connect(m_exportAction, &QAction::triggered, this, [this] {
+        const QString file = ScheduleExport::run(this, *m_document, m_units->system());
+        if (!file.isEmpty())
+            statusBar()->showMessage(tr("Schedule written to %1").arg(QDir::toNativeSeparators(file)), 8000);
+    });
     m_quitAction = new QAction(tr("&Quit"), this);
     m_quitAction->setShortcut(QKeySequence::Quit);
     m_quitAction->setMenuRole(QAction::QuitRole);
@@ -298,6 +312,8 @@ void MainWindow::createMenus()
     file->addSeparator();
     file->addAction(m_saveAction);
     file->addAction(m_saveAsAction);
+    file->addSeparator();
+    file->addAction(m_exportAction);
     file->addSeparator();
     file->addAction(m_quitAction);
     updateRecentMenu();

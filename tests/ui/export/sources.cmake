@@ -5,4 +5,5 @@ list(APPEND AIRWRIGHT_UI_TEST_SOURCES
     ui/export/PdfText.cpp
     ui/export/SchedulePdfTest.cpp
     ui/export/ScheduleCommandTest.cpp
+    ui/export/ScheduleExportTest.cpp
 )

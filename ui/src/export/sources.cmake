@@ -19,6 +19,8 @@ list(APPEND AIRWRIGHT_UI_SOURCES
     src/export/PsychroChartPainter.cpp
     include/airwright/ui/export/PressureProfilePainter.h
     src/export/PressureProfilePainter.cpp
+    include/airwright/ui/export/ScheduleExport.h
+    src/export/ScheduleExport.cpp
     include/airwright/ui/export/ScheduleCommand.h
     src/export/ScheduleCommand.cpp
 )
