@@ -131,9 +131,17 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
 
     // Crossing flows of a wheel (see the header).
     const MassFlow supplyOutFlow = rotary ? supplyIn.dryAir / m_spec.outdoorAirCorrection : supplyIn.dryAir;
-    const MassFlow transfer = rotary ? supplyOutFlow * m_spec.exhaustAirTransfer.value() : MassFlow{};
-    const MassFlow supplyCore = supplyOutFlow - transfer;
-    const MassFlow purge = supplyIn.dryAir - supplyCore;
+    MassFlow transfer = rotary ? supplyOutFlow * m_spec.exhaustAirTransfer.value() : MassFlow{};
+    MassFlow supplyCore = supplyOutFlow - transfer;
+    MassFlow purge = supplyIn.dryAir - supplyCore;
+    if (purge.value() < 0.0) {
+        // OACF below 1 - EATR: the supply leaves with more air than the outdoor
+        // side took in plus EATR, so extract air crosses beyond EATR. All of the
+        // outdoor air goes through the core and none of it to the exhaust.
+        transfer = transfer - purge;
+        supplyCore = supplyIn.dryAir;
+        purge = MassFlow{};
+    }
     MassFlow extractCore = extractIn.dryAir - transfer;
     if (extractCore.value() <= 1e-9 || supplyCore.value() <= 1e-9)
         throw InputError("heat recovery " + std::string(exchangerKindLabel(m_spec.kind))

@@ -6,8 +6,10 @@
 // Rotary leakage as EN 308 / Eurovent practice defines the ratios: with supply
 // outlet flow m, the outdoor side takes in OACF m; EATR m of extract air crosses
 // into the supply, so the supply core carries (1 - EATR) m and the purge/carry-over
-// (OACF - 1 + EATR) m of outdoor air goes to the exhaust. Mass and energy of both
-// streams balance with these crossing flows.
+// (OACF - 1 + EATR) m of outdoor air goes to the exhaust. Where that is negative
+// (OACF below 1 - EATR) no outdoor air goes to the exhaust and (1 - OACF) m of
+// extract air crosses into the supply. Mass and energy of both streams balance
+// with these crossing flows.
 
 #include "airwright/core/Finding.h"
 #include "airwright/core/recovery/AirToAirExchanger.h"
