@@ -4,3 +4,7 @@ set(AIRWRIGHT_BENCH_SOURCES
     ChainBench.cpp
     AnnualBench.cpp
 )
+# Benchmarks of the desktop program's views; only with the GUI library.
+set(AIRWRIGHT_BENCH_UI_SOURCES
+    UiBench.cpp
+)

@@ -7,6 +7,8 @@ set(AIRWRIGHT_UI_SOURCES
     src/AppSettings.cpp
     include/airwright/ui/Appearance.h
     src/Appearance.cpp
+    include/airwright/ui/AppStyle.h
+    src/AppStyle.cpp
     include/airwright/ui/CasesEditor.h
     src/CasesEditor.cpp
     include/airwright/ui/CasesModel.h

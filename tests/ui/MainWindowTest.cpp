@@ -5,18 +5,32 @@
 #include "UiTestSupport.h"
 
 #include "airwright/ui/AppSettings.h"
+#include "airwright/ui/CautionsDialog.h"
 #include "airwright/ui/EditInfoCommand.h"
 #include "airwright/ui/MainWindow.h"
+#include "airwright/ui/ProjectEditor.h"
+#include "airwright/ui/SectionEditor.h"
+#include "airwright/ui/SectionPalette.h"
 #include "airwright/ui/ScreenshotWriter.h"
 #include "airwright/ui/SectionCatalog.h"
 #include "airwright/ui/SectionPaths.h"
 #include "airwright/ui/UnitDrawing.h"
 #include "airwright/ui/UnitSystem.h"
 
+#include <QAction>
+#include <QApplication>
+#include <QElapsedTimer>
 #include <QFileInfo>
+#include <QMenu>
+#include <QMenuBar>
+#include <QTimer>
 #include <QImage>
+#include <QListWidget>
+#include <QScrollArea>
+#include <QScrollBar>
 #include <QTemporaryDir>
 
+#include <functional>
 #include <set>
 
 namespace Airwright::Ui {
@@ -127,6 +141,84 @@ TEST_F(MainWindowTest, RemembersUnitsAndRecentFiles)
     EXPECT_EQ(recent.front(), QFileInfo(ShellTest::demoPath()).absoluteFilePath());
 }
 
+// The cautions (electric heaters, frost, humidifier hygiene, design aid) open by
+// themselves on the first interactive start only, and Help > Cautions opens them
+// at any time.
+TEST_F(MainWindowTest, CautionsShownOnceAndReachableFromHelp)
+{
+    // Counts the cautions dialogs that open while events run, closing each.
+    auto cautionsOpened = [](const std::function<void()>& act) {
+        int opened = 0;
+        QTimer closer;
+        closer.setInterval(5);
+        QObject::connect(&closer, &QTimer::timeout, [&opened] {
+            if (auto* dialog = qobject_cast<CautionsDialog*>(QApplication::activeModalWidget())) {
+                ++opened;
+                dialog->accept();
+            }
+        });
+        closer.start();
+        act();
+        QElapsedTimer waited;
+        waited.start();
+        while (waited.elapsed() < 300)
+            QApplication::processEvents(QEventLoop::AllEvents, 20);
+        return opened;
+    };
+
+    auto o = options();
+    o.interactive = true;
+    {
+        MainWindow first(o);
+        EXPECT_EQ(cautionsOpened([&first] { EXPECT_TRUE(first.startUp()); }), 1);
+        EXPECT_TRUE(first.settings()->cautionsShown());
+    }
+    MainWindow second(o);
+    EXPECT_EQ(cautionsOpened([&second] { EXPECT_TRUE(second.startUp()); }), 0);
+
+    QAction* help = nullptr;
+    for (QAction* menu : second.menuBar()->actions())
+        if (menu->menu())
+            for (QAction* a : menu->menu()->actions())
+                if (a->text().remove(QLatin1Char('&')).startsWith(QStringLiteral("Cautions")))
+                    help = a;
+    ASSERT_NE(help, nullptr);
+    EXPECT_EQ(cautionsOpened([help] { help->trigger(); }), 1);
+
+    const QString text = CautionsDialog::text();
+    for (const char* topic : {"Electric heaters", "Frost", "Humidifier hygiene", "design aid", "Local codes"})
+        EXPECT_TRUE(text.contains(QString::fromLatin1(topic), Qt::CaseInsensitive)) << topic;
+}
+
+// What the screenshots showed once: a palette name cut short, an editor wider
+// than its dock. At the window's default size, in SI and IP, every section type
+// reads in full and the editors need no sideways scrolling.
+TEST_F(MainWindowTest, PanelsFitTheirTextAtTheDefaultSize)
+{
+    MainWindow window(options());
+    window.resize(1600, 1000);
+    ASSERT_TRUE(window.openFile(ShellTest::demoPath()));
+    window.document()->selectSection(QStringLiteral("heating-coil"));
+    window.show();
+    for (bool ip : {false, true}) {
+        window.setUnitSystemIp(ip);
+        for (QWidget* panel : {static_cast<QWidget*>(window.projectEditor()), static_cast<QWidget*>(window.sectionEditor())}) {
+            window.bringToFront(panel);
+            for (int i = 0; i < 5; ++i)
+                QApplication::processEvents();
+            for (const QScrollArea* area : panel->findChildren<QScrollArea*>())
+                EXPECT_FALSE(area->horizontalScrollBar()->isVisible())
+                    << panel->objectName().toStdString() << (ip ? " IP" : " SI");
+        }
+    }
+    // Each name with its symbol and the style's margins, as the item delegate
+    // measures it, within the list's visible width.
+    QListWidget* list = window.palette()->list();
+    for (int row = 0; row < list->count(); ++row)
+        EXPECT_LE(list->sizeHintForIndex(list->model()->index(row, 0)).width(), list->viewport()->width())
+            << list->item(row)->text().toStdString();
+}
+
 TEST_F(MainWindowTest, ScreenshotsOfEveryPanel)
 {
     MainWindow window(options());
@@ -136,7 +228,13 @@ TEST_F(MainWindowTest, ScreenshotsOfEveryPanel)
     QString error;
     const QStringList files = ScreenshotWriter::write(window, dir.filePath(QStringLiteral("shots")), &error);
     EXPECT_TRUE(error.isEmpty()) << error.toStdString();
-    EXPECT_EQ(static_cast<std::size_t>(files.size()), window.panels().size() + 2);
+    // The window, every panel and the second psychrometric diagram, in SI, IP and dark.
+    EXPECT_EQ(static_cast<std::size_t>(files.size()), 3 * (window.panels().size() + 2));
+    EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/psychrometric-chart-hx.png"))));
+    EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/main-window-dark.png"))));
+    // Left as it was found: SI, light.
+    EXPECT_EQ(window.units()->system(), UnitSystem::System::SI);
+    EXPECT_FALSE(window.settings()->darkPalette());
     for (const QString& file : files) {
         const QImage image(file);
         ASSERT_FALSE(image.isNull()) << file.toStdString();

@@ -1,9 +1,10 @@
 #include "airwright/ui/Appearance.h"
 
+#include "airwright/ui/AppStyle.h"
+
 #include <QApplication>
 #include <QPalette>
 #include <QStyle>
-#include <QStyleFactory>
 
 namespace Airwright::Ui {
 
@@ -40,7 +41,7 @@ QPalette Appearance::darkPalette()
 
 void Appearance::apply(bool dark)
 {
-    QApplication::setStyle(QStyleFactory::create(QStringLiteral("Fusion")));
+    QApplication::setStyle(new AppStyle); // the application takes ownership
     QApplication::setPalette(dark ? darkPalette() : QApplication::style()->standardPalette());
 }
 

@@ -13,6 +13,7 @@
 #include <QIcon>
 #include <QTemporaryDir>
 #include <QTextStream>
+#include <QTimer>
 
 #include <cstdlib>
 
@@ -79,18 +80,51 @@ int runScreenshots(const QString& directory, const QString& project)
     return 0;
 }
 
+int runQuitAfterShow(const QString& project)
+{
+    // The user's settings and recovery file stay untouched, and no dialog may wait
+    // for an answer; otherwise the same start as a user's very first one.
+    QTemporaryDir scratch;
+    if (!scratch.isValid()) {
+        QTextStream(stderr) << "airwright: cannot create a temporary folder\n";
+        return 1;
+    }
+    MainWindow::Options options;
+    options.interactive = false;
+    options.autosave = false;
+    options.settingsFile = scratch.filePath(QStringLiteral("settings.ini"));
+    options.recoveryDirectory = scratch.filePath(QStringLiteral("recovery"));
+    Appearance::apply(false);
+    MainWindow window(options);
+    const bool opened = window.startUp(project);
+    window.show();
+    // Once the event loop has delivered the show, paint the whole window (the
+    // charts included) and leave.
+    QTimer::singleShot(0, &window, [&window] {
+        window.repaint();
+        QApplication::quit();
+    });
+    const int code = QApplication::exec();
+    // A project that could not be opened was reported on stderr already.
+    return opened ? code : 1;
+}
+
 } // namespace
 
 int runGuiApplication(int argc, char** argv)
 {
-    // Screenshots need no display: fall back to the offscreen platform.
-    bool screenshot = false;
-    for (int i = 1; i < argc; ++i)
-        if (QByteArray(argv[i]) == "--screenshot" || QByteArray(argv[i]).startsWith("--screenshot="))
-            screenshot = true;
-    if (screenshot && !hasDisplay() && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
+    // Screenshots, the start timing, --help and --version need no display: fall
+    // back to the offscreen platform.
+    bool noDisplayNeeded = false;
+    for (int i = 1; i < argc; ++i) {
+        const QByteArray arg(argv[i]);
+        if (arg == "--screenshot" || arg.startsWith("--screenshot=") || arg == "--quit-after-show"
+            || arg == "--help" || arg == "-h" || arg == "--help-all" || arg == "--version" || arg == "-v")
+            noDisplayNeeded = true;
+    }
+    if (noDisplayNeeded && !hasDisplay() && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
         qputenv("QT_QPA_PLATFORM", "offscreen");
-    if (!screenshot && !hasDisplay() && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) {
+    if (!noDisplayNeeded && !hasDisplay() && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) {
         QTextStream(stderr) << "airwright: no display found (DISPLAY and WAYLAND_DISPLAY are empty).\n"
                                "Run 'airwright --screenshot DIR [PROJECT]' to render the window to PNG files.\n";
         return 1;
@@ -112,6 +146,12 @@ int runGuiApplication(int argc, char** argv)
                                                        "(offscreen) and exit."),
                                         QStringLiteral("DIR"));
     parser.addOption(screenshotOption);
+    QCommandLineOption quitAfterShowOption(
+        QStringList{QStringLiteral("quit-after-show")},
+        QStringLiteral("Start as on a first start (temporary settings, no dialogs), open PROJECT or the demo, "
+                       "show and paint the window once, then exit; for timing the start "
+                       "(bench/time-cold-start)."));
+    parser.addOption(quitAfterShowOption);
     parser.addPositionalArgument(QStringLiteral("project"), QStringLiteral("Project file to open (.awproj)."),
                                  QStringLiteral("[PROJECT]"));
     parser.process(app);
@@ -124,6 +164,8 @@ int runGuiApplication(int argc, char** argv)
 
     if (parser.isSet(screenshotOption))
         return runScreenshots(parser.value(screenshotOption), project);
+    if (parser.isSet(quitAfterShowOption))
+        return runQuitAfterShow(project);
 
     MainWindow window;
     window.setDarkPalette(window.settings()->darkPalette());

@@ -179,16 +179,16 @@ ProjectEditor::ProjectEditor(ProjectDocument* document, UnitSystem* units, QWidg
         m_airflows, m_document,
         {flow(tr("Supply airflow"), tr("Design airflow delivered to the rooms."), &Flows::supply),
          flow(tr("Extract airflow"), tr("Design airflow taken from the rooms."), &Flows::extract), basis,
-         pressure(tr("Supply: external before unit"),
+         pressure(tr("External Δp, outdoor air duct"),
                   tr("Pressure lost in the outdoor air duct and intake before the unit."),
                   &Flows::supplyExternalBefore),
-         pressure(tr("Supply: external after unit"),
+         pressure(tr("External Δp, supply duct"),
                   tr("Pressure lost in the supply ductwork and terminals after the unit."),
                   &Flows::supplyExternalAfter),
-         pressure(tr("Extract: external before unit"),
+         pressure(tr("External Δp, extract duct"),
                   tr("Pressure lost in the extract ductwork and grilles before the unit."),
                   &Flows::extractExternalBefore),
-         pressure(tr("Extract: external after unit"), tr("Pressure lost in the exhaust duct and outlet after the unit."),
+         pressure(tr("External Δp, exhaust duct"), tr("Pressure lost in the exhaust duct and outlet after the unit."),
                   &Flows::extractExternalAfter)},
         [](const Project::Project& p) -> const Flows& { return p.unit.airflows; },
         [](Project::Project& p, const Flows& v) { p.unit.airflows = v; });
@@ -230,7 +230,12 @@ ProjectEditor::ProjectEditor(ProjectDocument* document, UnitSystem* units, QWidg
                 return tr("not computed");
             const auto& s = result->sizing;
             const FieldQuantity len = FieldQuantity::length();
-            auto mm = [&](Length l) { return FieldQuantity::editText(len.toDisplay(*m_units, toMillimetres(l))); };
+            // A result, not an input: rounded to what a drawing would state (whole
+            // millimetres, tenths of an inch), not the editors' five digits.
+            const int decimals = m_units->system() == UnitSystem::System::IP ? 1 : 0;
+            auto mm = [&](Length l) {
+                return QString::number(len.toDisplay(*m_units, toMillimetres(l)), 'f', decimals);
+            };
             return tr("%1 × %2 %3 (width × height of a deck), unit length %4 %3")
                 .arg(mm(s.width), mm(s.height), len.unit(*m_units), mm(s.unitLength));
         },

@@ -34,4 +34,13 @@ QString ResourceLocator::demoProject()
     return dir.isEmpty() ? QString() : QDir(dir).filePath(kDemo);
 }
 
+QString ResourceLocator::demoClimate()
+{
+    const QString dir = resourcesDirectory();
+    if (dir.isEmpty())
+        return {};
+    const QString path = QDir(dir).filePath(QStringLiteral("demo/demo-climate.epw"));
+    return QFileInfo::exists(path) ? path : QString();
+}
+
 } // namespace Airwright::Ui

@@ -12,7 +12,10 @@
 #include <QMimeData>
 #include <QMouseEvent>
 #include <QPushButton>
+#include <QStyle>
 #include <QVBoxLayout>
+
+#include <algorithm>
 
 namespace Airwright::Ui {
 
@@ -36,6 +39,13 @@ SectionPalette::SectionPalette(QWidget* parent) : QWidget(parent)
         item->setData(Qt::UserRole, static_cast<int>(i));
     }
     m_list->setCurrentRow(0);
+    // Wide enough for the longest name beside its symbol: a cut name ("Cooling
+    // coil (chilled wa...") hides what the entry is.
+    int widest = 0;
+    for (int row = 0; row < m_list->count(); ++row)
+        widest = std::max(widest, m_list->fontMetrics().horizontalAdvance(m_list->item(row)->text()));
+    m_list->setMinimumWidth(widest + m_list->iconSize().width() + 3 * m_list->spacing() + 2 * m_list->frameWidth()
+                            + m_list->style()->pixelMetric(QStyle::PM_ScrollBarExtent) + 24);
     layout->addWidget(m_list, 1);
 
     auto* hint = new QLabel(tr("Drag a type onto the drawing, or add it after the selected section:"), this);

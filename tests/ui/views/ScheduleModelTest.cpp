@@ -56,9 +56,9 @@ TEST_F(ScheduleModelTest, CellsShowTheResultInTheChosenUnits)
     EXPECT_EQ(cell(0, ScheduleModel::InletTemperatureColumn),
               QString::number(Core::toCelsius(first.inlet.state.dryBulb()), 'f', 1));
     EXPECT_EQ(model.headerData(ScheduleModel::InletTemperatureColumn, Qt::Horizontal).toString(),
-              QStringLiteral("Inlet t [°C]"));
+              QStringLiteral("Inlet t\n[°C]"));
     EXPECT_EQ(model.headerData(ScheduleModel::PressureDropColumn, Qt::Horizontal).toString(),
-              QStringLiteral("Pressure drop [Pa]"));
+              QStringLiteral("Pressure drop\n[Pa]"));
     const QString figures = cell(rowOf("heating-coil"), ScheduleModel::FiguresColumn);
     EXPECT_TRUE(figures.contains(QStringLiteral("heating duty "))) << figures.toStdString();
     EXPECT_TRUE(figures.contains(QStringLiteral(" kW"))) << figures.toStdString();
@@ -77,9 +77,9 @@ TEST_F(ScheduleModelTest, UnitSwitchRoundTrip)
     units.setSystem(UnitSystem::System::IP);
     EXPECT_EQ(headerSignals, 1);
     EXPECT_EQ(model.headerData(ScheduleModel::InletTemperatureColumn, Qt::Horizontal).toString(),
-              QStringLiteral("Inlet t [°F]"));
+              QStringLiteral("Inlet t\n[°F]"));
     EXPECT_EQ(model.headerData(ScheduleModel::PressureDropColumn, Qt::Horizontal).toString(),
-              QStringLiteral("Pressure drop [in. w.g.]"));
+              QStringLiteral("Pressure drop\n[in. w.g.]"));
     // The IP number read back to SI agrees with the SI cell within the IP rounding.
     const auto& first = document.result()->cases[0].supply.front();
     const double shownF = cell(0, ScheduleModel::InletTemperatureColumn).toDouble();

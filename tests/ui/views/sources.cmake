@@ -6,5 +6,7 @@ list(APPEND AIRWRIGHT_UI_TEST_SOURCES
     ui/views/PressureProfileModelTest.cpp
     ui/views/ScheduleModelTest.cpp
     ui/views/FindingsModelTest.cpp
+    ui/views/MessageUnitsTest.cpp
+    ui/views/HeatRecoveryComparisonTest.cpp
     ui/views/ViewsTest.cpp
 )

@@ -1,5 +1,8 @@
 #include "airwright/ui/views/FindingsModel.h"
 
+#include "airwright/ui/UnitSystem.h"
+#include "airwright/ui/views/MessageUnits.h"
+
 #include <QPainter>
 #include <QPainterPath>
 #include <QPixmap>
@@ -74,6 +77,26 @@ QPixmap drawMarker(Core::Severity severity, int size)
 
 FindingsModel::FindingsModel(QObject* parent) : QAbstractTableModel(parent) {}
 
+void FindingsModel::setUnits(const UnitSystem* units)
+{
+    if (m_units)
+        disconnect(m_units, nullptr, this, nullptr);
+    m_units = units;
+    if (m_units)
+        connect(m_units, &UnitSystem::changed, this, [this] {
+            if (!m_rows.empty())
+                emit dataChanged(index(0, MessageColumn), index(rowCount() - 1, MessageColumn));
+        });
+    if (!m_rows.empty())
+        emit dataChanged(index(0, MessageColumn), index(rowCount() - 1, MessageColumn));
+}
+
+QString FindingsModel::message(const Row& row) const
+{
+    const QString text = QString::fromStdString(row.finding.message);
+    return m_units ? MessageUnits::toDisplay(text, *m_units) : text;
+}
+
 QIcon FindingsModel::severityIcon(Core::Severity severity)
 {
     QIcon icon;
@@ -134,7 +157,7 @@ QVariant FindingsModel::data(const QModelIndex& index, int role) const
         case SectionColumn:
             return f.sectionId.empty() ? QStringLiteral("(whole unit)") : QString::fromStdString(f.sectionId);
         case MessageColumn:
-            return QString::fromStdString(f.message);
+            return message(row);
         default:
             return {};
         }
@@ -144,7 +167,7 @@ QVariant FindingsModel::data(const QModelIndex& index, int role) const
         return {};
     case Qt::ToolTipRole:
         if (index.column() == MessageColumn)
-            return QStringLiteral("%1\n(%2)").arg(QString::fromStdString(f.message), QString::fromStdString(f.code));
+            return QStringLiteral("%1\n(%2)").arg(message(row), QString::fromStdString(f.code));
         return {};
     case SectionIdRole:
         return QString::fromStdString(f.sectionId);

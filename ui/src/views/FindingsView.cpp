@@ -10,6 +10,12 @@
 
 namespace Airwright::Ui {
 
+FindingsView::FindingsView(ProjectDocument* document, const UnitSystem* units, QWidget* parent)
+    : FindingsView(document, parent)
+{
+    m_model->setUnits(units);
+}
+
 FindingsView::FindingsView(ProjectDocument* document, QWidget* parent) : QWidget(parent), m_document(document)
 {
     m_model = new FindingsModel(this);
@@ -52,10 +58,13 @@ void FindingsView::rebuild()
     } else if (m_model->rows().empty()) {
         m_summary->setText(tr("No findings in any case"));
     } else {
-        m_summary->setText(tr("%1 errors, %2 warnings, %3 notes")
-                               .arg(counts[int(Core::Severity::Error)])
-                               .arg(counts[int(Core::Severity::Warning)])
-                               .arg(counts[int(Core::Severity::Info)]));
+        auto count = [](int n, const QString& one, const QString& many) {
+            return QStringLiteral("%1 %2").arg(n).arg(n == 1 ? one : many);
+        };
+        m_summary->setText(tr("%1, %2, %3 (every design case)")
+                               .arg(count(counts[int(Core::Severity::Error)], tr("error"), tr("errors")),
+                                    count(counts[int(Core::Severity::Warning)], tr("warning"), tr("warnings")),
+                                    count(counts[int(Core::Severity::Info)], tr("note"), tr("notes"))));
     }
 }
 

@@ -185,7 +185,10 @@ void PressureProfileView::redraw()
             auto* label = new QCPItemText(m_plot);
             label->position->setCoords(s.middle(), y(std::max(s.pressureInPa, s.pressureOutPa)));
             label->setPositionAlignment(Qt::AlignHCenter | Qt::AlignBottom);
-            label->setText(tr("fan %1").arg(signedText(u, s.pressureOutPa - s.pressureInPa)));
+            // Named, since the bands of both paths share one x axis.
+            label->setText(tr("%1 fan %2")
+                               .arg(path == PathKind::Supply ? tr("supply") : tr("extract"),
+                                    signedText(u, s.pressureOutPa - s.pressureInPa)));
             label->setFont(small);
             label->setColor(text);
             label->setPadding(QMargins(2, 0, 2, 3));

@@ -6,6 +6,7 @@
 
 #include <QButtonGroup>
 #include <QEvent>
+#include <QFontMetricsF>
 #include <QHBoxLayout>
 #include <QLabel>
 #include <QToolButton>
@@ -111,6 +112,7 @@ PsychroChartView::PsychroChartView(ProjectDocument* document, UnitSystem* units,
     connect(m_units, &UnitSystem::changed, this, &PsychroChartView::rebuild);
     connect(m_plot, &QCustomPlot::mouseMove, this, &PsychroChartView::onMouseMove);
     connect(m_plot, &QCustomPlot::mousePress, this, &PsychroChartView::onMousePress);
+    connect(m_plot, &QCustomPlot::afterLayout, this, &PsychroChartView::placeReferenceLabels);
     rebuild();
 }
 
@@ -144,6 +146,7 @@ void PsychroChartView::redraw()
 {
     m_plot->clearPlottables();
     m_plot->clearItems();
+    m_referenceLabels.clear();
     const QPalette pal = palette();
     PlotStyle::apply(*m_plot, pal);
     const QColor base = pal.color(QPalette::Base);
@@ -171,7 +174,8 @@ void PsychroChartView::redraw()
         axis->setTickLabelFont(small);
     }
 
-    // Reference lines.
+    // Reference lines; their labels are kept in priority order for hideCrowdedLabels.
+    QVector<ReferenceLabel> enthalpyLabels;
     for (const auto& line : m_model.lines()) {
         QPen pen(lineColour, 1.0);
         Qt::Alignment align = Qt::AlignCenter;
@@ -210,8 +214,16 @@ void PsychroChartView::redraw()
             } else {
                 item->setPadding(QMargins(2, 0, 2, 1));
             }
+            const ReferenceLabel placed{item, line.points, line.role == LineRole::RelativeHumidity, line.labelAt};
+            if (line.role == LineRole::Saturation)
+                m_referenceLabels.prepend(placed);
+            else if (line.role == LineRole::Enthalpy)
+                enthalpyLabels.push_back(placed);
+            else
+                m_referenceLabels.push_back(placed);
         }
     }
+    m_referenceLabels += enthalpyLabels;
 
     // The selected section, underneath the processes.
     const QString selected = m_document->selectedSection();
@@ -247,7 +259,17 @@ void PsychroChartView::redraw()
         key->setName(tr("extract air (dashed)"));
         key->addToLegend();
     }
-    m_plot->legend->setVisible(!processes.isEmpty());
+    // Keys for the thin reference lines that carry no label of their own: the
+    // dashed enthalpy lines would otherwise read like an extract process.
+    auto* enthalpyKey = addCurve(m_plot, {}, QPen(lineColour, 1.0, Qt::DashLine));
+    enthalpyKey->setName(tr("constant enthalpy"));
+    enthalpyKey->addToLegend();
+    if (tw) {
+        auto* wetBulbKey = addCurve(m_plot, {}, QPen(lineColour, 1.0, Qt::DotLine));
+        wetBulbKey->setName(tr("constant wet bulb"));
+        wetBulbKey->addToLegend();
+    }
+    m_plot->legend->setVisible(true);
     m_plot->legend->setFont(small);
     m_plot->axisRect()->insetLayout()->setInsetAlignment(
         0, tw ? (Qt::AlignTop | Qt::AlignLeft) : (Qt::AlignBottom | Qt::AlignRight));
@@ -264,6 +286,90 @@ void PsychroChartView::redraw()
         item->setPadding(QMargins(6, 4, 6, 4));
     }
     m_plot->replot();
+}
+
+void PsychroChartView::placeReferenceLabels()
+{
+    // A label may overhang the frame by a few pixels and still be read whole.
+    const QRectF frame = QRectF(m_plot->axisRect()->rect()).adjusted(-3, -3, 3, 3);
+    QVector<QRectF> taken;
+    if (m_plot->legend->visible())
+        taken.push_back(m_plot->legend->outerRect());
+    auto toPixel = [this](const QPointF& p) {
+        return QPointF(m_plot->xAxis->coordToPixel(p.x()), m_plot->yAxis->coordToPixel(p.y()));
+    };
+    for (const ReferenceLabel& label : m_referenceLabels) {
+        QCPItemText* item = label.item;
+        const QMargins pad = item->padding();
+        const QSizeF size = QSizeF(QFontMetricsF(item->font()).size(0, item->text()))
+                            + QSizeF(pad.left() + pad.right(), pad.top() + pad.bottom());
+        const Qt::Alignment align = item->positionAlignment();
+        auto boxAt = [&](const QPointF& anchor) {
+            double x = anchor.x() - size.width() / 2;
+            if (align & Qt::AlignLeft)
+                x = anchor.x();
+            else if (align & Qt::AlignRight)
+                x = anchor.x() - size.width();
+            double y = anchor.y() - size.height() / 2;
+            if (align & Qt::AlignTop)
+                y = anchor.y();
+            else if (align & Qt::AlignBottom)
+                y = anchor.y() - size.height();
+            return QRectF(QPointF(x, y), size);
+        };
+        auto isFree = [&](const QRectF& box) {
+            if (!frame.contains(box))
+                return false;
+            for (const QRectF& other : taken)
+                if (other.intersects(box))
+                    return false;
+            return true;
+        };
+
+        // Candidate anchors in pixels: the preferred one, then (for a sliding
+        // label) steps of a label height back down the line from it.
+        QVector<QPointF> candidates{toPixel(label.preferred)};
+        if (label.slides && label.line.size() >= 2) {
+            QVector<QPointF> pixels;
+            for (const QPointF& p : label.line)
+                pixels.push_back(toPixel(p));
+            // The piece of the line before the preferred anchor, walked backwards.
+            qsizetype k = pixels.size() - 1;
+            double best = std::numeric_limits<double>::max();
+            for (qsizetype i = 0; i < pixels.size(); ++i) {
+                const QPointF d = pixels[i] - candidates.front();
+                const double distance = std::hypot(d.x(), d.y());
+                if (distance < best) {
+                    best = distance;
+                    k = i;
+                }
+            }
+            const double step = size.height() + 2.0;
+            double travelled = 0.0;
+            double next = step;
+            for (qsizetype i = k; i > 0 && candidates.size() < 12; --i) {
+                const QPointF a = pixels[i];
+                const QPointF b = pixels[i - 1];
+                const double length = std::hypot(b.x() - a.x(), b.y() - a.y());
+                while (length > 0.0 && travelled + length >= next && candidates.size() < 12) {
+                    candidates.push_back(a + (b - a) * ((next - travelled) / length));
+                    next += step;
+                }
+                travelled += length;
+            }
+        }
+        bool shown = false;
+        for (const QPointF& anchor : candidates) {
+            const QRectF box = boxAt(anchor);
+            if (!isFree(box))
+                continue;
+            item->position->setPixelPosition(anchor);
+            taken.push_back(box.adjusted(-3, -1, 3, 1)); // a little air between neighbours
+            shown = true;
+            break;
+        }
+        item->setVisible(shown);
+    }
 }
 
 PsychroChartView::Hit PsychroChartView::hitAt(const QPointF& pixel) const

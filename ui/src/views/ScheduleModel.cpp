@@ -211,13 +211,19 @@ QVariant ScheduleModel::data(const QModelIndex& index, int role) const
 
 QVariant ScheduleModel::headerData(int section, Qt::Orientation orientation, int role) const
 {
+    // The key figures run long: their title stays at the start of the column,
+    // in sight, instead of in its middle.
+    if (orientation == Qt::Horizontal && role == Qt::TextAlignmentRole && section == FiguresColumn)
+        return QVariant(int(Qt::AlignLeft | Qt::AlignVCenter));
     if (orientation != Qt::Horizontal || role != Qt::DisplayRole || section < 0 || section >= ColumnCount)
         return QAbstractTableModel::headerData(section, orientation, role);
     const ColumnInfo info = columnInfo(section);
     const QString title = QString::fromUtf8(info.title);
     if (!info.kind)
         return title;
-    return QStringLiteral("%1 [%2]").arg(title, m_units->unit(*info.kind));
+    // The unit on a second line keeps the number columns narrow (toTsv joins the
+    // lines again).
+    return QStringLiteral("%1\n[%2]").arg(title, m_units->unit(*info.kind));
 }
 
 QString ScheduleModel::sectionId(int row) const

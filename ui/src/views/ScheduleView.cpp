@@ -13,6 +13,7 @@
 #include <QItemSelectionModel>
 #include <QLabel>
 #include <QSortFilterProxyModel>
+#include <QStyle>
 #include <QTableView>
 #include <QToolButton>
 #include <QVBoxLayout>
@@ -66,8 +67,10 @@ ScheduleView::ScheduleView(ProjectDocument* document, UnitSystem* units, QWidget
     m_table->setWordWrap(false);
     m_table->verticalHeader()->setVisible(false);
     m_table->verticalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
-    m_table->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
-    m_table->horizontalHeader()->setStretchLastSection(true);
+    m_table->horizontalHeader()->setSectionResizeMode(QHeaderView::Interactive);
+    // The key figures keep their full width (the table scrolls sideways) rather
+    // than being cut to what is left of the view.
+    m_table->horizontalHeader()->setStretchLastSection(false);
     m_table->setContextMenuPolicy(Qt::ActionsContextMenu);
     m_table->addAction(m_copy);
     layout->addWidget(m_table, 1);
@@ -80,7 +83,25 @@ ScheduleView::ScheduleView(ProjectDocument* document, UnitSystem* units, QWidget
     connect(m_table, &QTableView::clicked, this, &ScheduleView::rowActivated);
     connect(m_document, &ProjectDocument::resultsChanged, this, &ScheduleView::rebuild);
     connect(m_document, &ProjectDocument::selectionChanged, this, &ScheduleView::showSelection);
+    connect(m_model, &QAbstractItemModel::headerDataChanged, this, &ScheduleView::fitColumns);
     rebuild();
+}
+
+void ScheduleView::fitColumns()
+{
+    QHeaderView* header = m_table->horizontalHeader();
+    const QFontMetrics metrics(header->font());
+    const int margin = header->style()->pixelMetric(QStyle::PM_HeaderMargin, nullptr, header);
+    // Room for the sort arrow beside the text.
+    const int arrow = header->style()->pixelMetric(QStyle::PM_HeaderMarkSize, nullptr, header);
+    const QAbstractItemView* view = m_table; // the public face of QTableView's size hint
+    for (int column = 0; column < m_proxy->columnCount(); ++column) {
+        int width = view->sizeHintForColumn(column);
+        const QString title = m_proxy->headerData(column, Qt::Horizontal).toString();
+        for (const QString& line : title.split(QLatin1Char('\n')))
+            width = std::max(width, metrics.horizontalAdvance(line) + 2 * margin + arrow);
+        header->resizeSection(column, width);
+    }
 }
 
 int ScheduleView::caseIndex() const
@@ -118,6 +139,7 @@ void ScheduleView::rebuild()
     }
     const QString why = m_document->computeError();
     m_status->setText(result ? QString() : (why.isEmpty() ? tr("No results yet") : tr("No results: %1").arg(why)));
+    fitColumns();
     showSelection(m_document->selectedSection());
 }
 

@@ -19,4 +19,12 @@ list(APPEND AIRWRIGHT_UI_SOURCES
     src/views/FindingsModel.cpp
     include/airwright/ui/views/FindingsView.h
     src/views/FindingsView.cpp
+    include/airwright/ui/views/MessageUnits.h
+    src/views/MessageUnits.cpp
+    include/airwright/ui/views/ComparisonRunner.h
+    src/views/ComparisonRunner.cpp
+    include/airwright/ui/views/HeatRecoveryComparisonModel.h
+    src/views/HeatRecoveryComparisonModel.cpp
+    include/airwright/ui/views/HeatRecoveryComparisonView.h
+    src/views/HeatRecoveryComparisonView.cpp
 )

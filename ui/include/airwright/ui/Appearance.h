@@ -1,5 +1,5 @@
 #pragma once
-// Light or dark colours for the whole program (Fusion style with our palette).
+// Light or dark colours for the whole program (AppStyle, Fusion-based, with our palette).
 
 class QPalette;
 

@@ -14,6 +14,8 @@
 
 namespace Airwright::Ui {
 
+class UnitSystem;
+
 class FindingsModel : public QAbstractTableModel {
     Q_OBJECT
 public:
@@ -31,6 +33,12 @@ public:
 
     explicit FindingsModel(QObject* parent = nullptr);
 
+    // The messages' numbers follow this unit system (see MessageUnits); without
+    // one they are shown as core wrote them. units must outlive the model.
+    void setUnits(const UnitSystem* units);
+    // A row's message as shown.
+    QString message(const Row& row) const;
+
     void rebuild(const std::optional<Core::Chain::UnitResult>& result);
     const std::vector<Row>& rows() const { return m_rows; }
 
@@ -46,6 +54,7 @@ public:
 
 private:
     std::vector<Row> m_rows;
+    const UnitSystem* m_units = nullptr;
 };
 
 } // namespace Airwright::Ui

@@ -12,11 +12,14 @@ namespace Airwright::Ui {
 
 class FindingsModel;
 class ProjectDocument;
+class UnitSystem;
 
 class FindingsView : public QWidget {
     Q_OBJECT
 public:
     explicit FindingsView(ProjectDocument* document, QWidget* parent = nullptr);
+    // Messages in the units of `units` (SI or IP), following its changes.
+    FindingsView(ProjectDocument* document, const UnitSystem* units, QWidget* parent = nullptr);
 
     FindingsModel* model() const { return m_model; }
     QTableView* table() const { return m_table; }

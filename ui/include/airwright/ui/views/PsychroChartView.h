@@ -8,8 +8,11 @@
 
 #include "airwright/ui/views/PsychroChartModel.h"
 
+#include <QPointF>
+#include <QVector>
 #include <QWidget>
 
+class QCPItemText;
 class QCustomPlot;
 class QLabel;
 class QMouseEvent;
@@ -46,6 +49,19 @@ private:
 
     void rebuild();
     void redraw();
+    // After each layout of the plot (so in pixels of its current size): places the
+    // reference-line labels in the order saturation, relative humidity, enthalpy.
+    // A label that would be cut by the frame or cover the legend or a label placed
+    // before it slides down its line (relative humidity) or, where it cannot,
+    // is hidden.
+    void placeReferenceLabels();
+
+    struct ReferenceLabel {
+        QCPItemText* item = nullptr; // owned by the plot
+        QVector<QPointF> line;       // plot coordinates
+        bool slides = false;         // may move along the line
+        QPointF preferred;           // plot coordinates
+    };
     Hit hitAt(const QPointF& pixel) const;
     void onMouseMove(QMouseEvent* event);
     void onMousePress(QMouseEvent* event);
@@ -57,6 +73,7 @@ private:
     QToolButton* m_chartButton;
     QToolButton* m_mollierButton;
     QLabel* m_pressureLabel;
+    QVector<ReferenceLabel> m_referenceLabels; // in priority order
     PsychroChartModel::Diagram m_diagram = PsychroChartModel::Diagram::DryBulbHumidity;
 };
 

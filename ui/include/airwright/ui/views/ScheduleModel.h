@@ -1,7 +1,7 @@
 #pragma once
 // The section schedule of one design case as a table: one row per section per
 // path (a coupled section has a row on each path), numbers in the units of the
-// UnitSystem, the unit in the column header. Sort on SortRole (numbers as numbers).
+// UnitSystem, the unit on the column header's second line. Sort on SortRole (numbers as numbers).
 
 #include "airwright/core/chain/CaseResult.h"
 #include "airwright/core/chain/SectionFigures.h"

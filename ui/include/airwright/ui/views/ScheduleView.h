@@ -42,6 +42,10 @@ public slots:
 
 private:
     void rebuild();
+    // Each column as wide as its widest cell or header line (the unit sits on a
+    // second header line); QHeaderView's own fit adds the header's height for the
+    // sort arrow, which makes two-line headers far too wide.
+    void fitColumns();
     void showSelection(const QString& id);
     void rowActivated(const QModelIndex& index);
 
