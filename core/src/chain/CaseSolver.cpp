@@ -212,11 +212,12 @@ void CaseSolver::computeFlows()
             const MassFlow supplyOut = c.supplyIndex + 1 < supply.size() ? m_supplyInFlow[c.supplyIndex + 1] : m_supplyFlow;
             m = m + (m_supplyInFlow[c.supplyIndex] - supplyOut);
         }
-        if (m.value() < 0.0) {
-            m_caseFindings.push_back({Severity::Error, "flow.recirculation", extract[k].id,
-                                      "more air is recirculated than the extract path brings: "
-                                      "the extract flow after this section would be negative"});
-            m = kilogramsPerSecond(0.0);
+        if (!(m.value() > 1e-9)) {
+            // No air would be left for the rest of the extract path: the flows of
+            // the project contradict each other, whatever the air states.
+            throw InputError("case '" + m_case.name + "', section '" + extract[k].id
+                             + "': more air leaves the extract path here (recirculated or crossing) than reaches it; "
+                               "lower the recirculated share or raise the extract airflow");
         }
     }
 }

@@ -69,8 +69,14 @@ MarginModel makeModel(ExchangerKind kind, const Psychro::MoistAirState& extract,
     if (m.eps >= 1.0)
         throw InputError("temperature effectiveness", m.eps, "", "0 .. below 1");
     checkFraction("humidity effectiveness", m.epsW, 1.0, "0 .. 1");
-    if (isPlate(kind))
-        m.plateNtu = toFraction(ntuFromEffectiveness(arrangementOf(kind), temperatureEffectiveness, fraction(1.0)));
+    if (isPlate(kind)) {
+        // The onset model takes balanced flows; an unbalanced operating point can
+        // be more effective than a balanced exchanger ever is (NTU 100), and is
+        // then taken at that ceiling.
+        const double ceiling = toFraction(maximumEffectiveness(arrangementOf(kind), fraction(1.0)));
+        const double eps = std::min(m.eps, ceiling * (1.0 - 1e-12));
+        m.plateNtu = toFraction(ntuFromEffectiveness(arrangementOf(kind), fraction(eps), fraction(1.0)));
+    }
     if (!isRotary(kind)) {
         // Vapour too thin for a dew point in the psychro range: nothing to freeze
         // above -100 C.
