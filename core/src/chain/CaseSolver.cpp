@@ -300,7 +300,7 @@ Pressure CaseSolver::fanPressure(const std::vector<Section>& path, std::vector<S
             auto ctx = contextFor(ahead, Pressure{});
             ctx.pathDesignFlow = supply ? m_supplyDesignFlow : m_extractDesignFlow;
             if (supply) {
-                ctx.target.outletTemperature = m_case.supplySetpoint - m_drift[j];
+                ctx.target.outletTemperature = aimAt(j);
                 ctx.target.minHumidity = m_minHumidity;
                 ctx.target.maxHumidity = m_maxHumidity;
                 ctx.target.dehumidify = m_maxHumidity.has_value();
@@ -388,6 +388,12 @@ void CaseSolver::extractPass(bool untilFirstExchanger, std::size_t from)
     }
 }
 
+AbsoluteTemperature CaseSolver::aimAt(std::size_t k) const
+{
+    const double aim = toCelsius(m_case.supplySetpoint - m_drift[k]);
+    return celsius(std::clamp(aim, Psychro::kMinTemperatureC + 1.0, Psychro::kMaxTemperatureC - 1.0));
+}
+
 void CaseSolver::updateDrift()
 {
     const auto& path = m_unit.supply;
@@ -441,7 +447,7 @@ void CaseSolver::supplyPass(std::size_t from)
         const auto& section = path[k];
         Slot& slot = m_supply[k];
         air.dryAir = m_supplyInFlow[k];
-        const AbsoluteTemperature aim = m_case.supplySetpoint - m_drift[k];
+        const AbsoluteTemperature aim = aimAt(k);
         const bool hasTarget = !(dehumidifying && isHeating(section) && !m_case.dehumidifyWithReheat);
         const double key = hasTarget && usesTarget(section) ? aim.value() : std::numeric_limits<double>::quiet_NaN();
 
@@ -478,7 +484,7 @@ void CaseSolver::supplyPass(std::size_t from)
             in.supplyIn = air;
             in.extractIn = c.extractInlet.value_or(Sections::AirStream{*m_room, m_extractInFlow[c.extractIndex]});
             if (hr->bypassControl)
-                in.supplyTarget = m_case.supplySetpoint - m_drift[k];
+                in.supplyTarget = aimAt(k);
             const auto& out = c.evaluator->evaluate(in, c.memory);
             c.recovery = &out;
             const Pressure pOut = p - out.supplyPressureDrop;

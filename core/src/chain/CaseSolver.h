@@ -88,6 +88,10 @@ private:
     void finish(CaseResult& result, int iterations, bool converged, const std::string& unsettled);
     Coupling& coupling(const std::string& id);
     Sections::SectionContext contextFor(const Sections::AirStream& inlet, Pressure fanPressure) const;
+    // What a control at supply index k aims at: the setpoint less the drift after
+    // it, kept inside the psychrometric range (a drift that pushes it out cannot be
+    // met anyway, and the setpoint findings say so).
+    AbsoluteTemperature aimAt(std::size_t k) const;
 
     const AirHandlingUnit& m_unit;
     const DesignCase& m_case;
