@@ -11,6 +11,7 @@
 #include <QFile>
 #include <QTemporaryDir>
 
+#include <csignal>
 #include <memory>
 
 namespace Airwright::Ui {
@@ -97,6 +98,33 @@ TEST_F(RecoveryTest, OfferedAndRestoredAfterACrash)
     EXPECT_EQ(restarted.document()->project(), edited);
     EXPECT_TRUE(restarted.document()->isModified());
     EXPECT_EQ(restarted.document()->filePath(), ShellTest::demoPath());
+}
+
+// A real crash: a forked process edits, autosaves and is killed with SIGKILL (no
+// destructor, no close); the next start offers what it had.
+TEST_F(RecoveryTest, OfferedAfterTheProcessIsKilled)
+{
+    GTEST_FLAG_SET(death_test_style, "fast");
+    EXPECT_EXIT(
+        {
+            MainWindow doomed(options());
+            edit(doomed, "work of a killed process");
+            if (doomed.autosaveNow())
+                std::raise(SIGKILL);
+            std::_Exit(1); // the autosave failed: not the death we look for
+        },
+        ::testing::KilledBySignal(SIGKILL), "");
+    ASSERT_TRUE(QFile::exists(dir.filePath(QStringLiteral("recovery/recovery.awproj"))));
+
+    QString offered;
+    MainWindow restarted(options([&offered](const QString& description) {
+        offered = description;
+        return true;
+    }));
+    EXPECT_TRUE(restarted.startUp());
+    EXPECT_TRUE(offered.contains(QStringLiteral("work of a killed process"))) << offered.toStdString();
+    EXPECT_EQ(restarted.document()->project().info.name, "work of a killed process");
+    EXPECT_TRUE(restarted.document()->isModified());
 }
 
 TEST_F(RecoveryTest, DeclinedRecoveryIsDropped)
