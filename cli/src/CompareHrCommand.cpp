@@ -70,6 +70,73 @@ std::map<std::string, double> parseExtraCosts(const std::string& text, const std
     return costs;
 }
 
+// --set KEY.FIELD=VALUE,...: the datasheet inputs of an option, in the keys and
+// units of the project file's heat recovery section (docs/project-format.md).
+void applySettings(const std::string& text, std::vector<HeatRecoveryOption>& options)
+{
+    static const char* const kFields =
+        "efficiency_pct, humidity_efficiency_pct, supply_dp_Pa, extract_dp_Pa, eatr_pct, oacf, pump_W, "
+        "frost_strategy, extra_cost";
+    std::stringstream in(text);
+    std::string item;
+    while (std::getline(in, item, ',')) {
+        const auto dot = item.find('.');
+        const auto equals = item.find('=');
+        if (dot == std::string::npos || equals == std::string::npos || dot == 0 || equals < dot + 2)
+            throw InputError("--set: '" + item + "' is not OPTION.FIELD=VALUE (fields: " + kFields + ")");
+        const std::string key = item.substr(0, dot);
+        const std::string field = item.substr(dot + 1, equals - dot - 1);
+        const std::string value = item.substr(equals + 1);
+        const auto option = std::find_if(options.begin(), options.end(), [&](const auto& o) { return o.key == key; });
+        if (option == options.end()) {
+            std::string keys;
+            for (const auto& o : options)
+                keys += (keys.empty() ? "" : ", ") + o.key;
+            throw InputError("--set: unknown option '" + key + "' (options: " + keys + ")");
+        }
+        const std::string what = "--set " + key + "." + field;
+        if (field == "extra_cost") {
+            const double v = ArgumentList::parseNumber(value, what);
+            if (!(v >= 0.0))
+                throw InputError(what, v, "", "0 or more");
+            option->extraCost = v;
+            continue;
+        }
+        if (!option->spec)
+            throw InputError(what + ": the option '" + key + "' has no exchanger; only extra_cost applies");
+        Recovery::HeatRecovery& h = *option->spec;
+        if (field == "frost_strategy") {
+            const auto strategy = Recovery::frostStrategyFromKey(value);
+            if (!strategy)
+                throw InputError(what + ": unknown strategy '" + value + "'");
+            h.frostStrategy = *strategy;
+        } else {
+            const double v = ArgumentList::parseNumber(value, what);
+            if (field == "efficiency_pct")
+                h.ratedEfficiency = percent(v);
+            else if (field == "humidity_efficiency_pct")
+                h.ratedHumidityEfficiency = percent(v);
+            else if (field == "supply_dp_Pa")
+                h.ratedPressureDropSupply = pascals(v);
+            else if (field == "extract_dp_Pa")
+                h.ratedPressureDropExtract = pascals(v);
+            else if (field == "eatr_pct")
+                h.exhaustAirTransfer = percent(v);
+            else if (field == "oacf")
+                h.outdoorAirCorrection = v;
+            else if (field == "pump_W")
+                h.pumpPower = watts(v);
+            else
+                throw InputError("--set: unknown field '" + field + "' (fields: " + kFields + ")");
+        }
+        try {
+            h.validate();
+        } catch (const InputError& e) {
+            throw InputError(what + ": " + e.what());
+        }
+    }
+}
+
 std::string csvField(const std::string& text)
 {
     if (text.find_first_of(",\"\n") == std::string::npos)
@@ -327,6 +394,10 @@ std::string CompareHrCommand::help() const
            "  --years N             evaluation period of the ranking (default 15)\n"
            "  --extra-cost K=V,...  extra cost per option key, e.g. plate_counter_flow=9000\n"
            "                        (default: 0.8 .. 2.0 per m3/h of supply air, illustrative)\n"
+           "  --set K.F=V,...       an option's datasheet inputs, e.g.\n"
+           "                        plate_counter_flow.efficiency_pct=88,plate_counter_flow.supply_dp_Pa=190;\n"
+           "                        fields: efficiency_pct, humidity_efficiency_pct, supply_dp_Pa,\n"
+           "                        extract_dp_Pa, eatr_pct, oacf, pump_W, frost_strategy, extra_cost\n"
            "  --hours-per-day N     1 .. 24 (default 24)\n"
            "  --first-hour N        first operating hour of the day, 0 .. 23 (default 0)\n"
            "  --days-per-week N     1 .. 7, from Monday (default 7)\n"
@@ -343,7 +414,7 @@ int CompareHrCommand::run(const std::vector<std::string>& args, std::ostream& ou
 {
     ArgumentList list;
     for (const char* option : {"climate", "format", "heat-price", "electricity-price", "heat-co2", "electricity-co2",
-                               "cooling-eer", "years", "extra-cost", "hours-per-day", "first-hour", "days-per-week",
+                               "cooling-eer", "years", "extra-cost", "set", "hours-per-day", "first-hour", "days-per-week",
                                "holiday-weeks", "off-hours", "setback-airflow", "setback-k"})
         list.addOption(option);
     list.addFlag("no-sensitivity").allowPositionals(1);
@@ -393,6 +464,8 @@ int CompareHrCommand::run(const std::vector<std::string>& args, std::ostream& ou
             for (auto& o : options)
                 if (o.key == key)
                     o.extraCost = value;
+    if (const auto datasheet = list.value("set"))
+        applySettings(*datasheet, options);
 
     std::filesystem::path climateFile;
     if (const auto given = list.value("climate")) {

@@ -130,6 +130,33 @@ TEST(CompareHrCommand, BinsCsvAndText)
 
 namespace {
 
+TEST(CompareHrCommand, SetChangesAnOptionsDatasheet)
+{
+    auto option = [](const json& j, const std::string& key) {
+        for (const auto& o : j["options"])
+            if (o["key"] == key)
+                return o;
+        return json();
+    };
+    // Both with preheat frost protection: with bypass protection a more effective
+    // plate may frost earlier and give up more than it gains.
+    const auto base = run({kProject, "--climate", kBins, "--format", "json", "--no-sensitivity", "--set",
+                           "plate_cross_flow.frost_strategy=preheat"});
+    const auto set = run({kProject, "--climate", kBins, "--format", "json", "--no-sensitivity", "--set",
+                          "plate_cross_flow.frost_strategy=preheat,plate_cross_flow.efficiency_pct=80,"
+                          "plate_cross_flow.supply_dp_Pa=250,none.extra_cost=5"});
+    ASSERT_EQ(base.code, Airwright::Cli::Done) << base.err;
+    ASSERT_EQ(set.code, Airwright::Cli::Done) << set.err;
+    const auto before = option(json::parse(base.out), "plate_cross_flow");
+    const auto after = option(json::parse(set.out), "plate_cross_flow");
+    // A more effective exchanger recovers more; a larger rated drop costs fan energy.
+    EXPECT_NEAR(after["eta_t_1253"].get<double>(), 0.80, 1e-9);
+    EXPECT_GT(after["recovered_heating_MWh"].get<double>(), before["recovered_heating_MWh"].get<double>() + 1.0);
+    EXPECT_GT(after["dp_supply_Pa"].get<double>(), before["dp_supply_Pa"].get<double>());
+    EXPECT_GT(after["added_fan_MWh"].get<double>(), before["added_fan_MWh"].get<double>());
+    EXPECT_NEAR(option(json::parse(set.out), "none")["extra_cost"].get<double>(), 5.0, 1e-12);
+}
+
 struct BadRow {
     const char* what;
     std::vector<std::string> args;
@@ -158,7 +185,13 @@ INSTANTIATE_TEST_SUITE_P(
                       BadRow{"climate of unknown type", {kProject, "--climate", kProject}},
                       BadRow{"missing climate file", {kProject, "--climate", "/nonexistent/x.epw"}},
                       BadRow{"missing project", {"/nonexistent/p.awproj"}},
-                      BadRow{"unknown option", {kProject, "--speed", "1"}}));
+                      BadRow{"unknown option", {kProject, "--speed", "1"}},
+                      BadRow{"set without a field", {kProject, "--set", "plate_cross_flow=80"}},
+                      BadRow{"set of an unknown field", {kProject, "--set", "plate_cross_flow.colour=2"}},
+                      BadRow{"set of an unknown option", {kProject, "--set", "heat_pipe.efficiency_pct=60"}},
+                      BadRow{"efficiency of 100 %", {kProject, "--set", "plate_counter_flow.efficiency_pct=100"}},
+                      BadRow{"exchanger data for no exchanger", {kProject, "--set", "none.efficiency_pct=50"}},
+                      BadRow{"unknown frost strategy", {kProject, "--set", "plate_cross_flow.frost_strategy=hope"}}));
 
 TEST(CompareHrCommand, WithoutTheDemoClimateAsksForOne)
 {
