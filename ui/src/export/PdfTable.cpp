@@ -103,6 +103,18 @@ void PdfTable::placeHeader(PdfPager& pager, const std::vector<double>& widths, d
     });
 }
 
+double PdfTable::height(const PdfPager& pager) const
+{
+    const auto widths = columnWidths(pager);
+    Row headerRow;
+    for (const auto& c : m_columns)
+        headerRow.cells << c.header;
+    double total = m_showHeader ? rowHeight(pager, widths, headerRow, true) : 0.0;
+    for (const auto& row : m_rows)
+        total += rowHeight(pager, widths, row, false);
+    return total;
+}
+
 void PdfTable::place(PdfPager& pager) const
 {
     const auto widths = columnWidths(pager);

@@ -180,8 +180,9 @@ void ScheduleComposer::paragraph(const QString& text, PdfStyle::Role role, const
     });
 }
 
-void ScheduleComposer::caseTable(const std::vector<CaseRow>& rows, bool keepTogether)
+std::vector<PdfTable> ScheduleComposer::caseTables(const std::vector<CaseRow>& rows) const
 {
+    std::vector<PdfTable> tables;
     const int cases = static_cast<int>(m_result.cases.size());
     for (int first = 0; first < std::max(cases, 1); first += kCasesPerTable) {
         const int count = std::min(kCasesPerTable, cases - first);
@@ -193,7 +194,6 @@ void ScheduleComposer::caseTable(const std::vector<CaseRow>& rows, bool keepToge
         for (int i = count; i < kCasesPerTable; ++i)
             columns.push_back({QString(), 1.9, Qt::AlignRight});
         PdfTable table(columns);
-        table.setKeepTogether(keepTogether);
         for (const auto& row : rows) {
             if (row.values.isEmpty() && row.unit.isEmpty()) {
                 table.addGroup(row.label);
@@ -204,8 +204,18 @@ void ScheduleComposer::caseTable(const std::vector<CaseRow>& rows, bool keepToge
                 cells << row.values.value(first + i);
             table.addRow(cells);
         }
-        table.place(m_pager);
-        if (first + kCasesPerTable < cases)
+        tables.push_back(std::move(table));
+    }
+    return tables;
+}
+
+void ScheduleComposer::caseTable(const std::vector<CaseRow>& rows, bool keepTogether)
+{
+    auto tables = caseTables(rows);
+    for (std::size_t i = 0; i < tables.size(); ++i) {
+        tables[i].setKeepTogether(keepTogether);
+        tables[i].place(m_pager);
+        if (i + 1 < tables.size())
             m_pager.space(m_pager.mm(2.0));
     }
 }
@@ -707,10 +717,15 @@ void ScheduleComposer::sectionBlock(PathKind path, std::size_t index)
     const auto& section = sections[index];
     const auto* first = resultOf(0, path, section.id);
     const double length = toMillimetres(first ? first->length : Chain::sectionLength(section.spec));
+    const auto rows = sectionRows(path, section.id);
+    // The heading stays with its (kept-together) first table, up to a full page.
+    const auto tables = caseTables(rows);
+    const double tableHeight = tables.empty() ? 0.0 : tables.front().height(m_pager);
+    const double keepMm = std::min(tableHeight, m_pager.contentHeight() * 0.8) / m_pager.mm(1.0);
     subheading(QStringLiteral("%1  %2: %3, %4 long")
                    .arg(sectionNumber(path, index), q(section.id), typeLabel(path, section), m_format.lengthMm(length)),
-               40.0);
-    caseTable(sectionRows(path, section.id), true);
+               std::max(40.0, keepMm));
+    caseTable(rows, true);
 
     // Findings about this section, case by case.
     std::vector<std::pair<QString, QString>> notes;

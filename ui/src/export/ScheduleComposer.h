@@ -57,6 +57,8 @@ private:
     void subheading(const QString& text, double keepWithNextMm = 30.0);
     void paragraph(const QString& text, PdfStyle::Role role = PdfStyle::Body, const QColor& colour = {});
     void caseTable(const std::vector<CaseRow>& rows, bool keepTogether);
+    // The case tables of `rows`, kCasesPerTable cases each.
+    std::vector<PdfTable> caseTables(const std::vector<CaseRow>& rows) const;
     void keyValues(const std::vector<std::pair<QString, QString>>& rows);
 
     // Figures of a section result per case, in display units.

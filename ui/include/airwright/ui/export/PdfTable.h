@@ -34,6 +34,8 @@ public:
 
     // Lays the table out at the pager's cursor.
     void place(PdfPager& pager) const;
+    // Height the table takes when placed whole (header and every row).
+    double height(const PdfPager& pager) const;
 
 private:
     struct Row {
