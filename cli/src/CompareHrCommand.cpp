@@ -348,6 +348,51 @@ std::string reportText(const Project::Project& project, const std::string& clima
 
 } // namespace
 
+std::filesystem::path CompareHrCommand::climatePath(const std::optional<std::string>& given,
+                                                   const std::vector<std::filesystem::path>& candidates)
+{
+    if (given)
+        return *given;
+    for (const auto& candidate : candidates) {
+        std::error_code ec;
+        if (std::filesystem::is_regular_file(candidate, ec))
+            return candidate;
+    }
+    throw InputError("no --climate given and the demo climate (resources/demo/demo-climate.epw) was not "
+                     "found; pass --climate FILE.epw or a bin table CSV");
+}
+
+std::optional<ComparisonResult> CompareHrCommand::runOn(const HeatRecoveryComparison& comparison,
+                                                        const Project::Project& project,
+                                                        const std::filesystem::path& climateFile, std::ostream& err)
+{
+    std::string extension = climateFile.extension().string();
+    std::transform(extension.begin(), extension.end(), extension.begin(),
+                   [](unsigned char ch) { return static_cast<char>(std::tolower(ch)); });
+    if (extension == ".epw") {
+        const auto weather = EpwReader().readFile(climateFile);
+        for (const auto& gap : weather.filledGaps)
+            err << "warning: " << climateFile.string() << ": " << gap.hours << " missing hours of " << gap.quantity
+                << " from line " << gap.firstLine << " filled by interpolation\n";
+        return comparison.run(weather.weather);
+    }
+    if (extension == ".csv")
+        return comparison.run(BinTableReader(project.unit.site.pressure()).readFile(climateFile));
+    throw InputError("--climate: '" + climateFile.string()
+                     + "' is neither an EPW weather file (.epw) nor a bin table (.csv)");
+}
+
+ComparisonResult CompareHrCommand::compareWithDefaults(const Project::Project& project,
+                                                       const std::filesystem::path& climateFile, std::ostream& err)
+{
+    const HeatRecoveryComparison comparison(project.unit, defaultHeatRecoveryOptions(project.unit.airflows.supply),
+                                            ComparisonSettings{});
+    auto result = runOn(comparison, project, climateFile, err);
+    if (!result)
+        throw std::runtime_error("the comparison stopped before its end");
+    return *result;
+}
+
 std::vector<std::filesystem::path> CompareHrCommand::defaultClimateCandidates()
 {
     std::vector<std::filesystem::path> candidates;
@@ -467,39 +512,9 @@ int CompareHrCommand::run(const std::vector<std::string>& args, std::ostream& ou
     if (const auto datasheet = list.value("set"))
         applySettings(*datasheet, options);
 
-    std::filesystem::path climateFile;
-    if (const auto given = list.value("climate")) {
-        climateFile = *given;
-    } else {
-        for (const auto& candidate : m_climateCandidates) {
-            std::error_code ec;
-            if (std::filesystem::is_regular_file(candidate, ec)) {
-                climateFile = candidate;
-                break;
-            }
-        }
-        if (climateFile.empty())
-            throw InputError("no --climate given and the demo climate (resources/demo/demo-climate.epw) was not "
-                             "found; pass --climate FILE.epw or a bin table CSV");
-    }
-    std::string extension = climateFile.extension().string();
-    std::transform(extension.begin(), extension.end(), extension.begin(),
-                   [](unsigned char ch) { return static_cast<char>(std::tolower(ch)); });
-
+    const std::filesystem::path climateFile = climatePath(list.value("climate"), m_climateCandidates);
     const HeatRecoveryComparison comparison(project.unit, options, settings);
-    std::optional<ComparisonResult> result;
-    if (extension == ".epw") {
-        const auto weather = EpwReader().readFile(climateFile);
-        for (const auto& gap : weather.filledGaps)
-            err << "warning: " << climateFile.string() << ": " << gap.hours << " missing hours of " << gap.quantity
-                << " from line " << gap.firstLine << " filled by interpolation\n";
-        result = comparison.run(weather.weather);
-    } else if (extension == ".csv") {
-        result = comparison.run(BinTableReader(project.unit.site.pressure()).readFile(climateFile));
-    } else {
-        throw InputError("--climate: '" + climateFile.string()
-                         + "' is neither an EPW weather file (.epw) nor a bin table (.csv)");
-    }
+    const std::optional<ComparisonResult> result = runOn(comparison, project, climateFile, err);
     if (!result)
         throw std::runtime_error("the comparison stopped before its end");
 

@@ -73,6 +73,27 @@ TEST(ScheduleCommand, WritesThePdf)
     EXPECT_TRUE(Ui::Test::PdfText::text(file).contains(QStringLiteral("in. w.g.")));
 }
 
+TEST(ScheduleCommand, AddsTheHeatRecoveryComparison)
+{
+    if (!Ui::Test::PdfText::toolsAvailable())
+        GTEST_SKIP() << "poppler-utils not found";
+    QTemporaryDir dir;
+    const QString file = dir.filePath(QStringLiteral("with-comparison.pdf"));
+    const std::string bins = std::string(AIRWRIGHT_SOURCE_DIR) + "/resources/demo/demo-bins.csv";
+    const auto r = run({kDemo, "-o", file.toStdString(), "--compare-hr", "--climate", bins});
+    ASSERT_EQ(r.code, Cli::Done) << r.err;
+    const QString text = Ui::Test::PdfText::text(file).simplified();
+    EXPECT_TRUE(text.contains(QStringLiteral("Heat recovery options over a year")));
+    EXPECT_TRUE(text.contains(QStringLiteral("by temperature bins")));
+    for (const char* option : {"no heat recovery", "plate, cross-flow", "plate, counter-flow", "run-around coil loop"})
+        EXPECT_TRUE(text.contains(QString::fromLatin1(option))) << option;
+    EXPECT_TRUE(text.contains(QStringLiteral("Ranking by net benefit")));
+    // Without --compare-hr the chapter is absent.
+    const QString plain = dir.filePath(QStringLiteral("plain.pdf"));
+    ASSERT_EQ(run({kDemo, "-o", plain.toStdString()}).code, Cli::Done);
+    EXPECT_FALSE(Ui::Test::PdfText::text(plain).contains(QStringLiteral("Heat recovery options over a year")));
+}
+
 // The CSV the command writes, read back as RFC 4180, against the compute JSON of
 // the same project: every number of the JSON is the same double in the CSV.
 TEST(ScheduleCommand, CsvMatchesComputeNumberForNumber)
@@ -135,4 +156,7 @@ INSTANTIATE_TEST_SUITE_P(
                       BadRun{{kDemo, "-o", "/tmp/x.csv", "--units", "IP"}},
                       BadRun{{"/nonexistent/project.awproj", "-o", "/tmp/x.pdf"}},
                       BadRun{{kDemo, "-o", "/nonexistent-folder/x.pdf"}},
-                      BadRun{{kDemo, "-o", "/nonexistent-folder/x.csv"}}));
+                      BadRun{{kDemo, "-o", "/nonexistent-folder/x.csv"}},
+                      BadRun{{kDemo, "-o", "/tmp/x.pdf", "--climate", "/tmp/none.epw"}},
+                      BadRun{{kDemo, "-o", "/tmp/x.csv", "--compare-hr"}},
+                      BadRun{{kDemo, "-o", "/tmp/x.pdf", "--compare-hr", "--climate", "/nonexistent/x.epw"}}));

@@ -1,6 +1,7 @@
 #include "airwright/ui/export/ScheduleCommand.h"
 
 #include "airwright/cli/ArgumentList.h"
+#include "airwright/cli/CompareHrCommand.h"
 #include "airwright/cli/ExitCode.h"
 #include "airwright/cli/ScheduleCsv.h"
 #include "airwright/core/InputError.h"
@@ -59,6 +60,7 @@ std::string ScheduleCommand::summary() const
 std::string ScheduleCommand::help() const
 {
     return "usage: airwright-cli schedule FILE -o OUT.pdf|OUT.csv [--paper A4|Letter] [--units SI|IP]\n"
+           "                              [--compare-hr [--climate FILE.epw|BINS.csv]]\n"
            "\n"
            "Loads the project FILE, computes every design case and writes the section\n"
            "schedule. The extension of OUT chooses the format:\n"
@@ -71,6 +73,9 @@ std::string ScheduleCommand::help() const
            "  -o, --output OUT   the file to write (replaced if it exists)\n"
            "  --paper PAPER      A4 (default) or Letter; PDF only\n"
            "  --units UNITS      SI (default) or IP; PDF only (CSV is always SI)\n"
+           "  --compare-hr       add a chapter comparing heat recovery options over a year\n"
+           "                     (the defaults of 'airwright-cli compare-hr'); PDF only\n"
+           "  --climate FILE     its climate: EPW or bin table CSV (default: the demo climate)\n"
            "\n"
            "Exit codes: 0 written, 2 invalid input, 3 internal error.\n";
 }
@@ -82,7 +87,8 @@ int ScheduleCommand::run(const std::vector<std::string>& args, std::ostream& out
     for (const auto& a : args)
         normalized.push_back(a == "-o" ? std::string("--output") : a);
     Cli::ArgumentList list;
-    list.addOption("output").addOption("paper").addOption("units").allowPositionals(1);
+    list.addOption("output").addOption("paper").addOption("units").addFlag("compare-hr").addOption("climate");
+    list.allowPositionals(1);
     list.parse(normalized);
     if (list.positionals().size() != 1)
         throw Core::InputError("schedule needs one project FILE (see 'airwright-cli schedule --help')");
@@ -107,6 +113,11 @@ int ScheduleCommand::run(const std::vector<std::string>& args, std::ostream& out
             throw Core::InputError("--units must be SI or IP, not '" + *units + "'");
         options.units = u == "IP" ? UnitSystem::System::IP : UnitSystem::System::SI;
     }
+    if (list.has("climate") && !list.has("compare-hr"))
+        throw Core::InputError("--climate goes with --compare-hr");
+    if (ext == ".csv" && list.has("compare-hr"))
+        throw Core::InputError("--compare-hr adds a chapter to the PDF schedule; for its figures as CSV use "
+                         "'airwright-cli compare-hr FILE --format csv'");
     if (ext == ".csv" && (list.has("paper") || options.units == UnitSystem::System::IP))
         throw Core::InputError("--paper and --units IP apply to the PDF schedule; the CSV is written in SI with the "
                                "units in its column names");
@@ -129,6 +140,12 @@ int ScheduleCommand::run(const std::vector<std::string>& args, std::ostream& out
         out << *output << ": " << result.cases.size() << " cases, CSV schedule written\n";
         return Cli::Done;
     }
+
+    if (list.has("compare-hr"))
+        options.comparison = Cli::CompareHrCommand::compareWithDefaults(
+            project, Cli::CompareHrCommand::climatePath(list.value("climate"),
+                                                        Cli::CompareHrCommand::defaultClimateCandidates()),
+            err);
 
     GuiForRun gui;
     const auto outcome = SchedulePdf::write(QString::fromStdString(*output), project, result, options);

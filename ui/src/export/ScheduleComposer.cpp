@@ -83,8 +83,8 @@ QString filterConstructionWord(Sections::FilterConstruction c)
 } // namespace
 
 ScheduleComposer::ScheduleComposer(PdfPager& pager, const Project::Project& project, const Chain::UnitResult& result,
-                                   const UnitSystem& units)
-    : m_pager(pager), m_project(project), m_result(result), m_units(units), m_format(units)
+                                   const UnitSystem& units, const Core::Annual::ComparisonResult* comparison)
+    : m_pager(pager), m_project(project), m_result(result), m_units(units), m_comparison(comparison), m_format(units)
 {
     // The checks need results that fit the unit; a schedule is still worth
     // printing without them, so their failure is reported in the document.
@@ -111,6 +111,7 @@ void ScheduleComposer::compose()
     filterGroups();
     fans();
     heatRecovery();
+    comparison();
     charts();
     pointsSheet();
     findings();
@@ -859,6 +860,88 @@ void ScheduleComposer::fans()
     paragraph(QStringLiteral("Total pressure = the path's internal pressure drops plus its external pressure. Overall "
                              "efficiency = impeller x motor x drive x speed control. SFP of one fan: its electric power "
                              "over its flow."),
+              PdfStyle::Small, PdfStyle::mutedText());
+}
+
+void ScheduleComposer::comparison()
+{
+    if (!m_comparison)
+        return;
+    const auto& r = *m_comparison;
+    const bool ip = m_format.ip();
+    // Energy a year: MWh, or million Btu (1 MWh = 3.412142 MMBtu).
+    const QString energyUnit = ip ? QStringLiteral("MMBtu") : QStringLiteral("MWh");
+    auto energy = [&](Core::Annual::Energy e) {
+        const double mwh = Core::Annual::toMegawattHours(e);
+        return ScheduleUnits::fixed(ip ? mwh * 3.412142 : mwh, 1);
+    };
+    auto pressure = [&](Pressure p) { return m_format.number(FigureKind::Pressure, toPascals(p)); };
+    auto rankOf = [&](const std::string& key) {
+        for (const auto& e : r.ranking)
+            if (e.key == key)
+                return QString::number(e.rank);
+        return QStringLiteral("-");
+    };
+
+    heading(nextChapter(QStringLiteral("Heat recovery options over a year")));
+    const auto& c = r.climate;
+    paragraph(QStringLiteral("Climate: %1, %2, %3 h, mean %4, lowest %5; unit in operation %6 h a year. Savings are "
+                             "against the option without heat recovery; energy in %7 a year.")
+                  .arg(c.site.empty() ? QStringLiteral("bin table") : q(c.site),
+                       c.method == Core::Annual::ClimateMethod::Hourly ? QStringLiteral("hour by hour")
+                                                                        : QStringLiteral("by temperature bins"),
+                       ScheduleUnits::fixed(toHours(c.duration), 0),
+                       m_format.withUnit(FigureKind::Temperature, toCelsius(c.meanDryBulb)),
+                       m_format.withUnit(FigureKind::Temperature, toCelsius(c.minDryBulb)),
+                       ScheduleUnits::fixed(toHours(c.operatingTime), 0), energyUnit),
+              PdfStyle::Body);
+    const QString pu = m_format.unit(FigureKind::Pressure);
+    PdfTable table({{QStringLiteral("rank"), 0.8, Qt::AlignRight},
+                    {QStringLiteral("option"), 2.9, Qt::AlignLeft},
+                    {QStringLiteral("eff. [%]"), 0.9, Qt::AlignRight},
+                    {QStringLiteral("EU 1253 [%]"), 1.0, Qt::AlignRight},
+                    {QStringLiteral("dp s / e [%1]").arg(pu), 1.4, Qt::AlignRight},
+                    {QStringLiteral("heat rec. [%1]").arg(energyUnit), 1.2, Qt::AlignRight},
+                    {QStringLiteral("frost [%1]").arg(energyUnit), 1.1, Qt::AlignRight},
+                    {QStringLiteral("frost [h]"), 0.9, Qt::AlignRight},
+                    {QStringLiteral("+ fan [%1]").arg(energyUnit), 1.1, Qt::AlignRight},
+                    {QStringLiteral("net [%1]").arg(energyUnit), 1.1, Qt::AlignRight},
+                    {QStringLiteral("cost / year"), 1.1, Qt::AlignRight},
+                    {QStringLiteral("CO2 [t]"), 0.9, Qt::AlignRight},
+                    {QStringLiteral("payback [years]"), 1.1, Qt::AlignRight}});
+    for (const auto& o : r.options) {
+        table.addRow({rankOf(o.key), q(o.name),
+                      o.hasRecovery ? ScheduleUnits::fixed(toPercent(o.designEffectiveness), 1) : QStringLiteral("-"),
+                      o.hasRecovery ? ScheduleUnits::fixed(toPercent(o.regulationEfficiency), 1) : QStringLiteral("-"),
+                      o.hasRecovery ? pressure(o.supplyPressureDrop) + QStringLiteral(" / ") + pressure(o.extractPressureDrop)
+                                    : QStringLiteral("-"),
+                      energy(o.energy.recoveredHeating), energy(o.energy.frostProtection),
+                      ScheduleUnits::fixed(toHours(o.energy.frostTime), 0), energy(o.addedFanEnergy),
+                      energy(o.netSaving), ScheduleUnits::fixed(o.costSaving, 0),
+                      ScheduleUnits::fixed(toKilograms(o.co2Saving) / 1000.0, 1),
+                      o.paybackYears ? ScheduleUnits::fixed(*o.paybackYears, 1) : QStringLiteral("-")},
+                     r.ranking.empty() || r.ranking.front().key != o.key ? PdfTable::RowStyle::Normal
+                                                                         : PdfTable::RowStyle::Bold);
+    }
+    table.setKeepTogether(true);
+    table.place(m_pager);
+    paragraph(QStringLiteral("eff.: temperature effectiveness at the coldest design case, full recovery; EU 1253: "
+                             "thermal efficiency as Regulation (EU) No 1253/2014 defines it; dp s / e: pressure drop "
+                             "on the supply and extract side; heat rec.: heat recovered a year; frost: energy given up "
+                             "to frost protection and the hours it acts; + fan: fan energy added by the exchanger's "
+                             "pressure drops; net: delivered energy saved, heat and electricity; cost, CO2: saved a "
+                             "year; payback: extra cost over the cost saved a year."),
+              PdfStyle::Small, PdfStyle::mutedText());
+    subheading(QStringLiteral("Ranking by net benefit"), 20.0);
+    for (const auto& e : r.ranking) {
+        QString name = q(e.key);
+        for (const auto& o : r.options)
+            if (o.key == e.key)
+                name = q(o.name);
+        paragraph(QStringLiteral("%1. %2: %3").arg(e.rank).arg(name, q(e.reason)), PdfStyle::Small);
+    }
+    paragraph(QStringLiteral("Prices, emission factors, extra costs and the option data are the inputs of the "
+                             "comparison (illustrative defaults unless entered); confirm them before a decision."),
               PdfStyle::Small, PdfStyle::mutedText());
 }
 

@@ -2,6 +2,7 @@
 // What the printed schedule says and in which order: lays every chapter out on
 // a PdfPager. Private to SchedulePdf.
 
+#include "airwright/core/annual/ComparisonResult.h"
 #include "airwright/core/chain/CaseResult.h"
 #include "airwright/core/chain/SectionFigures.h"
 #include "airwright/core/checks/MeasurementPoints.h"
@@ -27,7 +28,7 @@ class UnitSystem;
 class ScheduleComposer {
 public:
     ScheduleComposer(PdfPager& pager, const Core::Project::Project& project, const Core::Chain::UnitResult& result,
-                     const UnitSystem& units);
+                     const UnitSystem& units, const Core::Annual::ComparisonResult* comparison = nullptr);
 
     void compose();
 
@@ -48,6 +49,7 @@ private:
     void filterGroups();
     void fans();
     void heatRecovery();
+    void comparison();
     void charts();
     void pointsSheet();
     void findings();
@@ -79,6 +81,7 @@ private:
     const Core::Project::Project& m_project;
     const Core::Chain::UnitResult& m_result;
     const UnitSystem& m_units;
+    const Core::Annual::ComparisonResult* m_comparison = nullptr;
     ScheduleUnits m_format;
     std::optional<Core::Checks::UnitAssessment> m_assessment;
     QString m_assessmentError;

@@ -84,7 +84,7 @@ SchedulePdf::Outcome SchedulePdf::write(const QString& file, const Core::Project
     const QRectF page = writer.pageLayout().paintRectPixels(kResolution).toRectF().translated(
         -writer.pageLayout().paintRectPixels(kResolution).topLeft().toPointF());
     PdfPager pager(writer, kResolution, page);
-    ScheduleComposer(pager, project, result, units).compose();
+    ScheduleComposer(pager, project, result, units, options.comparison ? &*options.comparison : nullptr).compose();
 
     QPainter painter;
     if (!painter.begin(&writer))

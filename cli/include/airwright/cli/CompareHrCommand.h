@@ -1,8 +1,14 @@
 #pragma once
 
 #include "airwright/cli/Command.h"
+#include "airwright/core/annual/ComparisonResult.h"
+#include "airwright/core/annual/HeatRecoveryComparison.h"
+#include "airwright/core/project/Project.h"
 
 #include <filesystem>
+#include <optional>
+#include <ostream>
+#include <string>
 #include <vector>
 
 namespace Airwright::Cli {
@@ -19,6 +25,20 @@ public:
     // the source tree (compile definition AIRWRIGHT_SOURCE_DIR, when the library
     // is built with it), then next to the executable.
     static std::vector<std::filesystem::path> defaultClimateCandidates();
+    // The climate file given, else the first candidate that exists; InputError
+    // when there is none.
+    static std::filesystem::path climatePath(const std::optional<std::string>& given,
+                                             const std::vector<std::filesystem::path>& candidates);
+    // Runs a comparison on an EPW file (hourly) or a bin table CSV (bins); the
+    // warnings of the weather file go to err. Empty when stopped.
+    static std::optional<Core::Annual::ComparisonResult> runOn(const Core::Annual::HeatRecoveryComparison& comparison,
+                                                               const Core::Project::Project& project,
+                                                               const std::filesystem::path& climateFile,
+                                                               std::ostream& err);
+    // The default options and settings (what compare-hr does without options).
+    static Core::Annual::ComparisonResult compareWithDefaults(const Core::Project::Project& project,
+                                                              const std::filesystem::path& climateFile,
+                                                              std::ostream& err);
 
     CompareHrCommand() : m_climateCandidates(defaultClimateCandidates()) {}
     explicit CompareHrCommand(std::vector<std::filesystem::path> climateCandidates)

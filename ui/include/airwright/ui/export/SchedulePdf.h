@@ -3,12 +3,14 @@
 // project and design conditions, the unit summary with its classes, the section
 // schedule of each path (section by section, the design cases side by side),
 // filters, fans, heat recovery and frost, the psychrometric chart and pressure
-// profiles, the measuring and control points, findings, and the cautions.
+// profiles, the measuring and control points, findings, the cautions, and a heat
+// recovery comparison over a year when one is given.
 // Text is drawn as text (selectable, searchable); charts as vector paths.
 //
 // Needs a QGuiApplication (fonts); ScheduleCommand creates one when run from the
 // command line.
 
+#include "airwright/core/annual/ComparisonResult.h"
 #include "airwright/core/chain/CaseResult.h"
 #include "airwright/core/project/Project.h"
 #include "airwright/ui/UnitSystem.h"
@@ -28,6 +30,8 @@ public:
         Paper paper = Paper::A4;
         UnitSystem::System units = UnitSystem::System::SI;
         bool airflowInLitresPerSecond = false; // SI only
+        // A heat recovery comparison of this unit, printed as its own chapter.
+        std::optional<Core::Annual::ComparisonResult> comparison;
     };
 
     struct Outcome {
