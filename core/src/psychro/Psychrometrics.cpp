@@ -2,6 +2,7 @@
 
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
+#include "airwright/core/psychro/MoistAirState.h"
 #include "airwright/core/psychro/PsychroRaw.h"
 
 #include <algorithm>
@@ -722,6 +723,14 @@ HumidityRatio checkedHumidityRatioAt(AbsoluteTemperature t, HumidityRatio w, Pre
     const double tC = checkedCelsius(t, "dry-bulb temperature");
     const double p = checkedPressure(pressure);
     return kilogramsPerKilogram(checkedUnsaturated(tC, checkedHumidityRatio(w), satPressure(tC), p));
+}
+
+MoistAirState detail::stateBelowSaturation(AbsoluteTemperature tdb, HumidityRatio w, Pressure p)
+{
+    checkedCelsius(tdb, "dry-bulb temperature");
+    checkedPressure(p);
+    checkedHumidityRatio(w);
+    return MoistAirState(tdb, w, p);
 }
 
 AbsoluteTemperature dewPointFromVapourPressure(Pressure vapourPressure)

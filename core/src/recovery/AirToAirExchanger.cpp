@@ -14,7 +14,10 @@
 #include "airwright/core/recovery/FrostOnset.h"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
+#include <cstddef>
+#include <optional>
 #include <string>
 #include <utility>
 
@@ -73,17 +76,24 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewP
     const double cw = warm.capacity();
     const double qDry = rate(1.0);
     const double tDry = warm.t - qDry / cw;
-    // Saturation humidity ratio, remembering the last one: the solve asks again
-    // for the temperatures it has just tried (tDry, and the root it returns).
-    double lastT = tDry, lastWs = raw::satHumidityRatio(tDry, warm.p);
+    // Saturation humidity ratio, remembering the last two: the solve asks again
+    // for the temperatures it has just tried (tDry, and the root it returns, which
+    // need not be the last one tried).
+    const double wsDry = raw::satHumidityRatio(tDry, warm.p);
+    double lastT[2] = {tDry, tDry}, lastWs[2] = {wsDry, wsDry};
     auto satW = [&](double t) {
-        if (t != lastT) {
-            lastT = t;
-            lastWs = raw::satHumidityRatio(t, warm.p);
+        if (t == lastT[0])
+            return lastWs[0];
+        if (t != lastT[1]) {
+            lastT[1] = lastT[0];
+            lastWs[1] = lastWs[0];
+            lastT[0] = t;
+            lastWs[0] = raw::satHumidityRatio(t, warm.p);
+            return lastWs[0];
         }
-        return lastWs;
+        return lastWs[1];
     };
-    if (warm.w <= lastWs)
+    if (warm.w <= lastWs[0])
         return {qDry, tDry, warm.w, 0.0, 1.0};
 
     const double hIn = raw::enthalpy(warm.t, warm.w);
@@ -126,9 +136,34 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewP
     return {q, t, ws, warm.m * (warm.w - ws), meanSlope(t, q)};
 }
 
+// Unmixed cross-flow effectiveness of the last few (NTU, Cr) pairs: within one
+// evaluation the cold corner asks again for the pair of the converged wet-surface
+// step, which the solve has already computed.
+struct CrossFlowMemo {
+    struct Entry {
+        double n = -1.0, cr = -1.0, eps = 0.0; // n = -1: empty (an NTU is never negative)
+    };
+    std::array<Entry, 4> entries{};
+    std::size_t next = 0;
+
+    double operator()(double n, double cr)
+    {
+        for (const Entry& e : entries)
+            if (e.n == n && e.cr == cr)
+                return e.eps;
+        Entry& e = entries[next];
+        next = (next + 1) % entries.size();
+        e = {n, cr, Kernels::crossFlowBothUnmixed(n, cr)};
+        return e.eps;
+    }
+};
+
+// An outlet that needs no clamp: core() has already found W <= Ws(t) for it (the
+// wet-surface solve caps W at Ws(t), a heated or dry-cooled stream keeps a W below
+// it, a rotor outlet passed the clamp test), so pws(t) is not computed again.
 Psychro::MoistAirState stateOf(double tC, double w, double p)
 {
-    return Psychro::MoistAirState::fromDryBulbHumidityRatio(celsius(tC), kilogramsPerKilogram(w), pascals(p));
+    return Psychro::detail::stateBelowSaturation(celsius(tC), kilogramsPerKilogram(w), pascals(p));
 }
 
 } // namespace
@@ -336,13 +371,21 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
         if (ms > 0.0 && dT > 0.0) {
             const FlowArrangement arrangement = arrangementOf(kind);
             const double haWarm = conductancePerSide(warm.m), haCold = conductancePerSide(cold.m);
+            // Cross-counter passes go through the memo, where the cold corner below
+            // finds the pass of the converged step again.
+            const bool crossCounter = arrangement == FlowArrangement::CrossCounterFlow;
+            CrossFlowMemo passEffectiveness;
             auto rate = [&](double b) {
                 const double cw = b * cWarm;
                 const double ua = 1.0 / (1.0 / (b * haWarm) + 1.0 / haCold);
                 const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
-                return Kernels::effectiveness(arrangement, std::min(ua / cmin, kMaxNtu), cmin / cmax,
-                                              kCrossCounterFlowPasses)
-                       * cmin * dT;
+                const double n = std::min(ua / cmin, kMaxNtu), cr = cmin / cmax;
+                const double eps =
+                    crossCounter && n > 0.0
+                        ? Kernels::crossCounterFlowFromPass(passEffectiveness(n / kCrossCounterFlowPasses, cr), cr,
+                                                            kCrossCounterFlowPasses)
+                        : Kernels::effectiveness(arrangement, n, cr, kCrossCounterFlowPasses);
+                return eps * cmin * dT;
             };
             const WarmOutcome w = coolWarmStream(warm, cold.t, warmDewPoint, rate);
             (extractWarm ? teOut : tsOut) = w.tOut;
@@ -354,9 +397,12 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
                 const double cw = w.b * cWarm, haW = w.b * haWarm;
                 const double ua = 1.0 / (1.0 / haW + 1.0 / haCold);
                 const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
-                surface = Kernels::coldCornerSurface(arrangement, cold.t, warm.t, w.tOut,
-                                                     std::min(ua / cmin, kMaxNtu), cmin / cmax, cw <= cCold,
-                                                     haCold / (haCold + haW));
+                const double n = std::min(ua / cmin, kMaxNtu), cr = cmin / cmax;
+                const std::optional<double> passEps =
+                    crossCounter ? std::optional<double>(passEffectiveness(n / kCrossCounterFlowPasses, cr))
+                                 : std::nullopt;
+                surface = Kernels::coldCornerSurface(arrangement, cold.t, warm.t, w.tOut, n, cr, cw <= cCold,
+                                                     haCold / (haCold + haW), passEps);
                 frost = Kernels::surfaceFrosts(surface, warmPw);
                 margin = surfaceMargin(surface);
             }

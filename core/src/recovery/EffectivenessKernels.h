@@ -4,6 +4,7 @@
 
 #include "airwright/core/recovery/FlowArrangement.h"
 
+#include <algorithm>
 #include <cmath>
 
 namespace Airwright::Core::Recovery::Kernels {
@@ -77,23 +78,33 @@ inline double crossFlowBothUnmixed(double n, double cr)
     split(n, tN, pN);
     split(x, tX, pX);
     double sum = pN * pX;
-    for (int k = 1; k < 2000; ++k) {
-        // 1/k from a table while it lasts: the loop runs about 10 to 30 times at
-        // usual NTU, and a multiplication is far cheaper than two divisions.
-        const double invK = k < kReciprocalCount ? kReciprocals[k] : 1.0 / k;
+    // Adds term k given 1/k; false once the terms no longer count (or P has
+    // reached its rounding floor).
+    auto addTerm = [&](double invK) {
         tN *= n * invK;
         tX *= x * invK;
         pN -= tN;
         pX -= tX;
-        if (pN <= 0.0 || pX <= 0.0)
-            break;
+        if (!(std::min(pN, pX) > 0.0))
+            return false;
         const double term = pN * pX;
         sum += term;
-        if (term < 1e-16 * sum)
-            break;
-    }
+        return !(term < 1e-16 * sum);
+    };
+    // 1/k from a table while it lasts: the loop runs about 10 to 30 times at
+    // usual NTU, and a multiplication is far cheaper than two divisions. Two
+    // loops rather than a test per term for which of the two to use.
+    int k = 1;
+    while (k < kReciprocalCount && addTerm(kReciprocals[k]))
+        ++k;
+    if (k == kReciprocalCount)
+        while (k < 2000 && addTerm(1.0 / k))
+            ++k;
     return sum / x;
 }
+
+// Up to this many passes multiPassCounter sums the geometric series directly.
+inline constexpr int kGeometricPassLimit = 16;
 
 // n passes of a per-pass effectiveness in overall counter-flow, streams mixed
 // between passes (Incropera eq. 11.31b,c).
@@ -103,18 +114,37 @@ inline double multiPassCounter(double passEps, double cr, int passes)
     if (delta < kBalancedTolerance)
         return passes * passEps / (1.0 + (passes - 1) * passEps);
     // r = ((1 - eps1 Cr) / (1 - eps1))^n = (1 + eps1 delta / (1 - eps1))^n
-    const double rMinusOne = std::expm1(passes * std::log1p(passEps * delta / (1.0 - passEps)));
+    const double y = passEps * delta / (1.0 - passEps);
+    double rMinusOne;
+    if (passes <= kGeometricPassLimit) {
+        // r - 1 = y (1 + (1+y) + ... + (1+y)^(n-1)): positive terms, no cancellation
+        // for small y, and far cheaper than expm1 and log1p for the few passes used.
+        const double onePlusY = 1.0 + y;
+        double power = 1.0, sum = 0.0;
+        for (int k = 0; k < passes; ++k) {
+            sum += power;
+            power *= onePlusY;
+        }
+        rMinusOne = y * sum;
+    } else {
+        rMinusOne = std::expm1(passes * std::log1p(y));
+    }
     return rMinusOne / (rMinusOne + delta);
+}
+
+// Cross-counter-flow from its per-pass effectiveness (unmixed cross-flow at NTU / passes).
+inline double crossCounterFlowFromPass(double passEps, double cr, int passes)
+{
+    if (passEps >= 1.0)
+        return 1.0;
+    return multiPassCounter(passEps, cr, passes);
 }
 
 inline double crossCounterFlow(double n, double cr, int passes)
 {
     if (n <= 0.0)
         return 0.0;
-    const double passEps = crossFlowBothUnmixed(n / passes, cr);
-    if (passEps >= 1.0)
-        return 1.0;
-    return multiPassCounter(passEps, cr, passes);
+    return crossCounterFlowFromPass(crossFlowBothUnmixed(n / passes, cr), cr, passes);
 }
 
 inline double effectiveness(FlowArrangement arrangement, double n, double cr, int crossCounterPasses)

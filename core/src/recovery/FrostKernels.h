@@ -9,6 +9,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <optional>
 
 namespace Airwright::Core::Recovery::Kernels {
 
@@ -21,8 +22,11 @@ namespace Airwright::Core::Recovery::Kernels {
 //  cross-counter-flow: the same inside the last (coldest) of the passes, whose
 //    warm inlet follows from that pass's balance;
 //  other arrangements: the mixed outlet (not used for plates).
+// passEps: the cross-counter pass effectiveness at (ntu / passes, cr) when the
+// caller already has it (the exchanger's wet-surface solve has just computed it).
 inline double coldCornerSurface(FlowArrangement arrangement, double tCold, double tWarmIn, double tWarmOut,
-                                double ntu, double cr, bool warmIsCmin, double coldWeight)
+                                double ntu, double cr, bool warmIsCmin, double coldWeight,
+                                std::optional<double> passEps = std::nullopt)
 {
     const double m = warmIsCmin ? 1.0 : cr;
     double corner = tWarmOut;
@@ -32,8 +36,7 @@ inline double coldCornerSurface(FlowArrangement arrangement, double tCold, doubl
         break;
     case FlowArrangement::CrossCounterFlow: {
         const double passes = kCrossCounterFlowPasses;
-        const double passEps = crossFlowBothUnmixed(ntu / passes, cr);
-        const double k = passEps * m;
+        const double k = (passEps ? *passEps : crossFlowBothUnmixed(ntu / passes, cr)) * m;
         const double warmIntoLastPass = k < 1.0 ? (tWarmOut - k * tCold) / (1.0 - k) : tWarmOut;
         corner = tCold + (warmIntoLastPass - tCold) * std::exp(-ntu * m / passes);
         break;

@@ -9,6 +9,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <optional>
 
 namespace Airwright::Core::Recovery {
 
@@ -33,6 +34,9 @@ struct MarginModel {
     double eps, epsW;
     double plateNtu = 0.0;       // plates, Cr = 1
     double criticalSurface = 0.0; // min(0 C, extract dew/frost point)
+    // Cross-counter plates: the pass effectiveness at (plateNtu / passes, 1), the
+    // same at every outdoor temperature the onset solve tries, so computed once.
+    std::optional<double> passEps = std::nullopt;
 
     double surface(double tOut) const
     {
@@ -43,7 +47,8 @@ struct MarginModel {
             return tExtract - 0.5 * (1.0 + eps) * (tExtract - tOut);
         }
         const double warmOut = tExtract - eps * (tExtract - tOut);
-        return Kernels::coldCornerSurface(arrangementOf(kind), tOut, tExtract, warmOut, plateNtu, 1.0, true, 0.5);
+        return Kernels::coldCornerSurface(arrangementOf(kind), tOut, tExtract, warmOut, plateNtu, 1.0, true, 0.5,
+                                          passEps);
     }
 
     double margin(double tOut, double outdoorW) const
@@ -76,6 +81,8 @@ MarginModel makeModel(ExchangerKind kind, const Psychro::MoistAirState& extract,
         const double ceiling = toFraction(maximumEffectiveness(arrangementOf(kind), fraction(1.0)));
         const double eps = std::min(m.eps, ceiling * (1.0 - 1e-12));
         m.plateNtu = toFraction(ntuFromEffectiveness(arrangementOf(kind), fraction(eps), fraction(1.0)));
+        if (arrangementOf(kind) == FlowArrangement::CrossCounterFlow)
+            m.passEps = Kernels::crossFlowBothUnmixed(m.plateNtu / kCrossCounterFlowPasses, 1.0);
     }
     if (!isRotary(kind)) {
         // Vapour too thin for a dew point in the psychro range: nothing to freeze
@@ -144,12 +151,14 @@ std::optional<AbsoluteTemperature> frostOnsetOutdoorTemperature(ExchangerKind ki
         throw InputError("outdoor relative humidity", rh * 100.0, "%", "0 .. below 100 %");
     if (!(m.tExtract > 0.0))
         throw InputError("extract air temperature", m.tExtract, "C", "above 0 C for a frost onset");
+    const bool rotary = isRotary(kind);
     auto margin = [&](double tOut) {
+        if (!rotary) // a surface margin: the outdoor humidity does not enter it
+            return m.margin(tOut, 0.0);
         const double w = Psychro::humidityRatioFromRelativeHumidity(celsius(tOut), outdoorRelativeHumidity,
                                                                     extract.pressure())
                              .value();
-        const double g = m.margin(tOut, w);
-        return isRotary(kind) ? g * 1000.0 : g; // g/kg keeps both margins of order one
+        return m.margin(tOut, w) * 1000.0; // g/kg keeps both margins of order one
     };
     const double hi = 0.0;
     const double fHi = margin(hi);

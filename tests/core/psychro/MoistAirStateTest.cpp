@@ -87,6 +87,20 @@ TEST(MoistAirState, HumidityRatioARoundingAboveSaturationIsStoredAsSaturated)
     EXPECT_LE(toFraction(s.relativeHumidity()), 1.0);
 }
 
+TEST(MoistAirState, OutletFactoryGivesTheCheckedStateAtAndBelowSaturation)
+{
+    // detail::stateBelowSaturation skips only the pws(t) comparison; for any W up
+    // to Ws(t) it must store exactly what the checked factory stores.
+    for (double t : {-30.0, -0.5, 0.0, 12.0, 35.0, 80.0})
+        for (double share : {0.0, 0.4, 0.999, 1.0}) {
+            const double ws = toKilogramsPerKilogram(saturationHumidityRatio(celsius(t), kAtm));
+            const HumidityRatio w = kilogramsPerKilogram(share * ws);
+            EXPECT_EQ(detail::stateBelowSaturation(celsius(t), w, kAtm),
+                      MoistAirState::fromDryBulbHumidityRatio(celsius(t), w, kAtm))
+                << t << " C, " << share << " Ws";
+        }
+}
+
 TEST(MoistAirState, DryAirHasNoDewPointInRange)
 {
     // Perfectly dry air is a valid state (EN 308 dry tests use it), but its dew
@@ -150,5 +164,12 @@ INSTANTIATE_TEST_SUITE_P(
         InvalidRow{"EnthalpyNaN", "enthalpy",
                    [] {
                        MoistAirState::fromEnthalpyHumidityRatio(joulesPerKilogram(kNaN), gramsPerKilogram(5.0), kAtm);
-                   }}),
+                   }},
+        // The exchanger's outlet factory keeps every check but the saturation one.
+        InvalidRow{"BelowSaturationDryBulbTooHot", "dry-bulb temperature",
+                   [] { detail::stateBelowSaturation(celsius(250.0), gramsPerKilogram(5.0), kAtm); }},
+        InvalidRow{"BelowSaturationWNegative", "humidity ratio",
+                   [] { detail::stateBelowSaturation(celsius(20.0), gramsPerKilogram(-1.0), kAtm); }},
+        InvalidRow{"BelowSaturationPressureZero", "pressure",
+                   [] { detail::stateBelowSaturation(celsius(20.0), gramsPerKilogram(5.0), pascals(0.0)); }}),
     [](const ::testing::TestParamInfo<InvalidRow>& rowInfo) { return rowInfo.param.name; });

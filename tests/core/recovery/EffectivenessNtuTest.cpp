@@ -145,6 +145,21 @@ TEST(EffectivenessNtu, CrossCounterFlowLiesBetweenCrossAndCounterFlow)
     EXPECT_NEAR(eps(FlowArrangement::CrossCounterFlow, 4.0, 1.0), 4.0 * e1 / (1.0 + 3.0 * e1), 1e-12);
 }
 
+TEST(EffectivenessNtu, CrossCounterFlowMatchesTheMultiPassFormulaAtUnequalCapacities)
+{
+    // Incropera eq. 11.31b written out naively with std::pow: eps = (r - 1) / (r - Cr),
+    // r = ((1 - eps1 Cr) / (1 - eps1))^n, eps1 the unmixed cross-flow pass at NTU / n
+    // (tolerance 1e-12; Cr kept below 0.96, where the naive form loses no digits).
+    const int passes = kCrossCounterFlowPasses;
+    for (double cr : {0.0, 0.3, 0.7, 0.95})
+        for (double n : {0.05, 1.0, 4.0, 12.0, 40.0}) {
+            const double e1 = eps(FlowArrangement::CrossFlowBothUnmixed, n / passes, cr);
+            const double r = std::pow((1.0 - e1 * cr) / (1.0 - e1), passes);
+            EXPECT_NEAR(eps(FlowArrangement::CrossCounterFlow, n, cr), (r - 1.0) / (r - cr), 1e-12)
+                << "Cr " << cr << " NTU " << n;
+        }
+}
+
 TEST(EffectivenessNtu, InverseClosedFormsMatchTable114)
 {
     // Incropera table 11.4, written out naively (tolerance 1e-10).

@@ -7,6 +7,15 @@
 
 namespace Airwright::Core::Psychro {
 
+class MoistAirState;
+
+namespace detail {
+// fromDryBulbHumidityRatio for a hot loop that has itself just found W <= Ws(t)
+// (the exchanger outlets): the range checks, without computing pws(t) again.
+// Not for any other use: W above saturation is not caught here.
+MoistAirState stateBelowSaturation(AbsoluteTemperature tdb, HumidityRatio w, Pressure p);
+} // namespace detail
+
 class MoistAirState {
 public:
     // Dry air at 20 C and 101325 Pa: a valid state for result containers that are
@@ -39,6 +48,7 @@ public:
 
 private:
     MoistAirState(AbsoluteTemperature tdb, HumidityRatio w, Pressure p) : m_tdb(tdb), m_w(w), m_p(p) {}
+    friend MoistAirState detail::stateBelowSaturation(AbsoluteTemperature, HumidityRatio, Pressure);
 
     AbsoluteTemperature m_tdb;
     HumidityRatio m_w;
