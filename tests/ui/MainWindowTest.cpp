@@ -228,8 +228,11 @@ TEST_F(MainWindowTest, ScreenshotsOfEveryPanel)
     QString error;
     const QStringList files = ScreenshotWriter::write(window, dir.filePath(QStringLiteral("shots")), &error);
     EXPECT_TRUE(error.isEmpty()) << error.toStdString();
-    // The window, every panel and the second psychrometric diagram, in SI, IP and dark.
-    EXPECT_EQ(static_cast<std::size_t>(files.size()), 3 * (window.panels().size() + 2));
+    // The window, every panel, the second psychrometric diagram and the two input
+    // tabs of the heat recovery comparison, in SI, IP and dark.
+    EXPECT_EQ(static_cast<std::size_t>(files.size()), 3 * (window.panels().size() + 4));
+    EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/heat-recovery-comparison-options-ip.png"))));
+    EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/heat-recovery-comparison-prices.png"))));
     EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/psychrometric-chart-hx.png"))));
     EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/main-window-dark.png"))));
     // Left as it was found: SI, light.

@@ -146,6 +146,7 @@ void MainWindow::createPanels()
     auto* schedule = new ScheduleView(m_document, m_units, m_views);
     auto* findings = new FindingsView(m_document, m_units, m_views);
     auto* comparison = new HeatRecoveryComparisonView(m_document, m_units, m_views);
+    comparison->setSettingsStore(m_settings->store());
     chart->setObjectName(QStringLiteral("psychrometric-chart"));
     profile->setObjectName(QStringLiteral("pressure-profile"));
     schedule->setObjectName(QStringLiteral("section-schedule"));

@@ -13,6 +13,8 @@
 #include <QTabWidget>
 #include <QWidget>
 
+#include <utility>
+
 namespace Airwright::Ui {
 
 namespace {
@@ -70,6 +72,21 @@ bool writeSet(MainWindow& window, const QDir& dir, const QString& suffix, QStrin
         if (!grabTo(panel.widget, path, error))
             return false;
         written << path;
+        if (auto* comparison = qobject_cast<HeatRecoveryComparisonView*>(panel.widget)) {
+            // Its input tabs too.
+            using View = HeatRecoveryComparisonView;
+            for (const auto& [tab, name] : {std::pair{View::OptionsTab, QStringLiteral("-options")},
+                                            std::pair{View::PricesTab, QStringLiteral("-prices")}}) {
+                comparison->showTab(tab);
+                settle();
+                const QString page = dir.filePath(panel.fileName + name + suffix + QStringLiteral(".png"));
+                if (!grabTo(panel.widget, page, error))
+                    return false;
+                written << page;
+            }
+            comparison->showTab(View::ResultsTab);
+            continue;
+        }
         auto* chart = qobject_cast<PsychroChartView*>(panel.widget);
         if (!chart)
             continue;

@@ -8,5 +8,6 @@ list(APPEND AIRWRIGHT_UI_TEST_SOURCES
     ui/views/FindingsModelTest.cpp
     ui/views/MessageUnitsTest.cpp
     ui/views/HeatRecoveryComparisonTest.cpp
+    ui/views/HeatRecoveryInputsTest.cpp
     ui/views/ViewsTest.cpp
 )

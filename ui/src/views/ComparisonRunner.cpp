@@ -3,6 +3,7 @@
 #include "airwright/core/annual/BinTableReader.h"
 #include "airwright/core/annual/EpwReader.h"
 #include "airwright/core/annual/HeatRecoveryComparison.h"
+#include "airwright/core/annual/HeatRecoveryOption.h"
 
 #include <QFile>
 #include <QFileInfo>
@@ -34,8 +35,7 @@ void runJob(QPromise<Outcome>& promise, const ComparisonRunner::Job& job, std::s
         };
         const std::filesystem::path path(QFile::encodeName(job.climateFile).toStdString());
         const QString extension = QFileInfo(job.climateFile).suffix().toLower();
-        const HeatRecoveryComparison comparison(job.unit, defaultHeatRecoveryOptions(job.unit.airflows.supply),
-                                                job.settings);
+        const HeatRecoveryComparison comparison(job.unit, job.options, job.settings);
         if (extension == QLatin1String("epw"))
             outcome.result = comparison.run(EpwReader().readFile(path).weather, control);
         else if (extension == QLatin1String("csv"))
@@ -76,6 +76,9 @@ void ComparisonRunner::start(Job job)
             m_current->deleteLater();
     }
     m_stop = std::stop_source();
+    if (job.options.empty())
+        job.options = defaultHeatRecoveryOptions(job.unit.airflows.supply);
+    m_lastJob = job;
     auto* watcher = new QFutureWatcher<Outcome>(this);
     m_current = watcher;
     connect(watcher, &QFutureWatcherBase::progressValueChanged, this,

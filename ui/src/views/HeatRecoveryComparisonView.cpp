@@ -1,10 +1,14 @@
 #include "airwright/ui/views/HeatRecoveryComparisonView.h"
 
+#include "airwright/core/InputError.h"
 #include "airwright/ui/ProjectDocument.h"
 #include "airwright/ui/ResourceLocator.h"
 #include "airwright/ui/UnitSystem.h"
 #include "airwright/ui/views/ComparisonRunner.h"
 #include "airwright/ui/views/HeatRecoveryComparisonModel.h"
+#include "airwright/ui/views/HeatRecoveryOptionsModel.h"
+#include "airwright/ui/views/HeatRecoveryOptionsPanel.h"
+#include "airwright/ui/views/HeatRecoveryPricesPanel.h"
 #include "airwright/ui/views/PlotStyle.h"
 
 #include <QEvent>
@@ -16,7 +20,10 @@
 #include <QLabel>
 #include <QProgressBar>
 #include <QPushButton>
+#include <QScrollArea>
+#include <QSettings>
 #include <QSplitter>
+#include <QTabWidget>
 #include <QTableView>
 #include <QTimer>
 #include <QVBoxLayout>
@@ -40,6 +47,8 @@ HeatRecoveryComparisonView::HeatRecoveryComparisonView(ProjectDocument* document
 {
     m_model = new HeatRecoveryComparisonModel(units, this);
     m_runner = new ComparisonRunner(this);
+    m_inputsModel = new HeatRecoveryOptionsModel(units, this);
+    m_inputsModel->setSupplyFlow(m_document->project().unit.airflows.supply);
 
     auto* layout = new QVBoxLayout(this);
     layout->setContentsMargins(0, 0, 0, 0);
@@ -71,7 +80,9 @@ HeatRecoveryComparisonView::HeatRecoveryComparisonView(ProjectDocument* document
     m_status->setTextInteractionFlags(Qt::TextSelectableByMouse);
     layout->addWidget(m_status);
 
-    m_split = new QSplitter(Qt::Horizontal, this);
+    m_tabs = new QTabWidget(this);
+    m_tabs->setDocumentMode(true);
+    m_split = new QSplitter(Qt::Horizontal, m_tabs);
     auto* split = m_split;
     m_table = new QTableView(split);
     m_table->setModel(m_model);
@@ -88,7 +99,24 @@ HeatRecoveryComparisonView::HeatRecoveryComparisonView(ProjectDocument* document
     split->setStretchFactor(0, 1);
     split->setStretchFactor(1, 1);
     split->setChildrenCollapsible(false);
-    layout->addWidget(split, 1);
+    m_tabs->addTab(split, tr("Results"));
+    // In scroll areas: the view may be shorter than the table of options.
+    auto scrolled = [this](QWidget* page) {
+        auto* scroll = new QScrollArea(m_tabs);
+        scroll->setWidgetResizable(true);
+        scroll->setFrameShape(QFrame::NoFrame);
+        scroll->setWidget(page);
+        return scroll;
+    };
+    m_optionsPanel = new HeatRecoveryOptionsPanel(m_inputsModel);
+    m_pricesPanel = new HeatRecoveryPricesPanel(m_inputsModel);
+    m_tabs->addTab(scrolled(m_optionsPanel), tr("Options"));
+    m_tabs->setTabToolTip(OptionsTab, tr("The heat recovery options compared: efficiencies, pressure drops, frost "
+                                         "protection and extra cost"));
+    m_tabs->addTab(scrolled(m_pricesPanel), tr("Prices and Schedule"));
+    m_tabs->setTabToolTip(PricesTab, tr("Energy prices, CO2 factors, cooling EER, evaluation period and operating "
+                                        "hours of the comparison"));
+    layout->addWidget(m_tabs, 1);
 
     connect(choose, &QPushButton::clicked, this, &HeatRecoveryComparisonView::chooseClimate);
     connect(m_cancel, &QPushButton::clicked, m_runner, &ComparisonRunner::cancel);
@@ -109,6 +137,7 @@ HeatRecoveryComparisonView::HeatRecoveryComparisonView(ProjectDocument* document
                              "project. Compare Again to finish."));
     });
     connect(m_document, &ProjectDocument::resultsChanged, this, &HeatRecoveryComparisonView::projectChanged);
+    connect(m_inputsModel, &HeatRecoveryOptionsModel::inputsChanged, this, &HeatRecoveryComparisonView::inputsChanged);
     connect(m_units, &UnitSystem::changed, this, [this] {
         redraw();
         if (m_model->result())
@@ -136,6 +165,28 @@ void HeatRecoveryComparisonView::setClimateFile(const QString& path)
         runNow();
 }
 
+void HeatRecoveryComparisonView::showTab(Tab tab)
+{
+    m_tabs->setCurrentIndex(tab);
+}
+
+void HeatRecoveryComparisonView::setSettingsStore(QSettings* store)
+{
+    m_store = nullptr; // loading is no change to write back
+    if (store)
+        m_inputsModel->setInputs(HeatRecoveryInputs::load(*store));
+    m_store = store;
+}
+
+void HeatRecoveryComparisonView::inputsChanged()
+{
+    if (m_store) {
+        m_inputsModel->inputs().save(*m_store);
+        m_store->sync();
+    }
+    projectChanged();
+}
+
 void HeatRecoveryComparisonView::chooseClimate()
 {
     const QString start = m_climateFile.isEmpty() ? QString() : QFileInfo(m_climateFile).path();
@@ -148,6 +199,7 @@ void HeatRecoveryComparisonView::chooseClimate()
 
 void HeatRecoveryComparisonView::projectChanged()
 {
+    m_inputsModel->setSupplyFlow(m_document->project().unit.airflows.supply);
     m_stale = true;
     if (isVisible())
         runNow(); // stops the stale run
@@ -172,10 +224,26 @@ void HeatRecoveryComparisonView::runNow()
                              "choose a climate file."));
         return;
     }
-    ComparisonRunner::Job job{m_document->project().unit, m_climateFile, ComparisonSettings{}};
+    m_inputsModel->setSupplyFlow(m_document->project().unit.airflows.supply);
+    ComparisonRunner::Job job{m_document->project().unit, m_climateFile, m_inputsModel->inputs().settings(),
+                              m_inputsModel->options()};
     // The sensitivity table is not shown here; leaving it out makes a run three
     // times shorter.
     job.settings.sensitivity = false;
+    // Never a run on inputs the core refuses (a settings file edited by hand):
+    // say which and stop the stale run.
+    try {
+        job.settings.validate();
+        for (const auto& option : job.options)
+            if (option.spec)
+                option.spec->validate();
+    } catch (const Core::Error& error) {
+        m_runner->cancel();
+        m_model->setResult(std::nullopt, m_evaluationYears);
+        m_status->setText(tr("Not compared: %1 (see Options, Prices and Schedule).").arg(QString::fromUtf8(error.what())));
+        redraw();
+        return;
+    }
     m_evaluationYears = job.settings.evaluationYears;
     m_progress->setValue(0);
     setRunning(true);
@@ -245,8 +313,17 @@ void HeatRecoveryComparisonView::showResult(const ComparisonResult& result)
                 name = QString::fromStdString(o.name);
         text += tr("Best: %1, %2. ").arg(name, QString::fromStdString(best.reason));
     }
-    text += tr("Prices and extra costs are illustrative defaults (heat 0.10 and electricity 0.25 per kWh, "
-               "cooling EER 3.0); the command line's compare-hr takes your own.");
+    const auto& inputs = m_inputsModel->inputs();
+    const auto& p = inputs.settings().prices;
+    const QString prices = tr("heat %1 and electricity %2 per kWh, cooling EER %3")
+                               .arg(QString::number(p.heatPricePerKilowattHour, 'g', 4),
+                                    QString::number(p.electricityPricePerKilowattHour, 'g', 4),
+                                    QString::number(p.coolingEer, 'g', 3));
+    if (inputs.optionsAreDefault() && inputs.settingsAreDefault())
+        text += tr("Prices and extra costs are illustrative defaults (%1): enter your own under \"Options\" "
+                   "and \"Prices and Schedule\".").arg(prices);
+    else
+        text += tr("With your inputs (%1).").arg(prices);
     m_status->setText(text);
     redraw();
 }

@@ -25,6 +25,16 @@ list(APPEND AIRWRIGHT_UI_SOURCES
     src/views/ComparisonRunner.cpp
     include/airwright/ui/views/HeatRecoveryComparisonModel.h
     src/views/HeatRecoveryComparisonModel.cpp
+    include/airwright/ui/views/HeatRecoveryInputs.h
+    src/views/HeatRecoveryInputs.cpp
+    include/airwright/ui/views/HeatRecoveryOptionsModel.h
+    src/views/HeatRecoveryOptionsModel.cpp
+    include/airwright/ui/views/HeatRecoveryOptionsDelegate.h
+    src/views/HeatRecoveryOptionsDelegate.cpp
+    include/airwright/ui/views/HeatRecoveryOptionsPanel.h
+    src/views/HeatRecoveryOptionsPanel.cpp
+    include/airwright/ui/views/HeatRecoveryPricesPanel.h
+    src/views/HeatRecoveryPricesPanel.cpp
     include/airwright/ui/views/HeatRecoveryComparisonView.h
     src/views/HeatRecoveryComparisonView.cpp
 )

@@ -48,6 +48,10 @@ public:
 
     void sync();
 
+    // The store itself, for views that keep their own group of values in it
+    // (the heat recovery comparison's inputs).
+    QSettings* store() const { return m_settings.get(); }
+
 private:
     std::unique_ptr<QSettings> m_settings;
 };

@@ -8,6 +8,7 @@
 
 #include "airwright/core/annual/ComparisonResult.h"
 #include "airwright/core/annual/ComparisonSettings.h"
+#include "airwright/core/annual/HeatRecoveryOption.h"
 #include "airwright/core/chain/AirHandlingUnit.h"
 
 #include <QObject>
@@ -15,6 +16,7 @@
 
 #include <optional>
 #include <stop_token>
+#include <vector>
 
 template <typename T>
 class QFutureWatcher;
@@ -28,12 +30,16 @@ public:
         Core::Chain::AirHandlingUnit unit;
         QString climateFile; // an EPW weather file (.epw) or a bin table (.csv)
         Core::Annual::ComparisonSettings settings;
+        // Empty: the default options sized to the unit (defaultHeatRecoveryOptions).
+        std::vector<Core::Annual::HeatRecoveryOption> options = {};
     };
 
     explicit ComparisonRunner(QObject* parent = nullptr);
     ~ComparisonRunner() override; // stops any run and waits for its thread to let go
 
-    void start(Job job); // the default options sized to the unit, against none
+    void start(Job job); // the options (or the defaults) against none
+    // The job of the latest start(), options filled in; empty before the first.
+    const std::optional<Job>& lastJob() const { return m_lastJob; }
     void cancel();       // stops the run in progress; cancelled() follows
     bool isRunning() const { return m_current != nullptr; }
 
@@ -55,6 +61,7 @@ private:
 
     std::stop_source m_stop;
     QFutureWatcher<Outcome>* m_current = nullptr;
+    std::optional<Job> m_lastJob;
 };
 
 } // namespace Airwright::Ui

@@ -5,7 +5,10 @@
 // benefit. A table of the figures and a bar chart of the net energy saving per
 // option. The comparison runs off the GUI thread with progress and cancel; while
 // the view is shown, every edit of the project starts it again and stops the
-// stale run. Hidden, it waits until it is shown.
+// stale run. Hidden, it waits until it is shown. Two more tabs hold the inputs:
+// the options' datasheet figures (HeatRecoveryOptionsPanel), and the prices and
+// operating schedule (HeatRecoveryPricesPanel); a change there compares again in
+// the same way, and they are kept in the settings store when the window gives one.
 
 #include "airwright/core/annual/ComparisonResult.h"
 
@@ -16,13 +19,18 @@ class QCustomPlot;
 class QLabel;
 class QProgressBar;
 class QPushButton;
+class QSettings;
 class QSplitter;
 class QTableView;
+class QTabWidget;
 
 namespace Airwright::Ui {
 
 class ComparisonRunner;
 class HeatRecoveryComparisonModel;
+class HeatRecoveryOptionsPanel;
+class HeatRecoveryPricesPanel;
+class HeatRecoveryOptionsModel;
 class ProjectDocument;
 class UnitSystem;
 
@@ -34,6 +42,16 @@ public:
     HeatRecoveryComparisonModel* model() const { return m_model; }
     ComparisonRunner* runner() const { return m_runner; }
     QCustomPlot* plot() const { return m_plot; }
+    HeatRecoveryOptionsModel* inputsModel() const { return m_inputsModel; }
+    HeatRecoveryOptionsPanel* optionsPanel() const { return m_optionsPanel; }
+    HeatRecoveryPricesPanel* pricesPanel() const { return m_pricesPanel; }
+    enum Tab { ResultsTab, OptionsTab, PricesTab };
+    QTabWidget* tabs() const { return m_tabs; }
+    void showTab(Tab tab);
+
+    // Reads the inputs from `store` and writes every change back; store must
+    // outlive the view. Without one the inputs last as long as the view.
+    void setSettingsStore(QSettings* store);
     QString statusText() const;
 
     const QString& climateFile() const { return m_climateFile; }
@@ -56,11 +74,17 @@ private:
     void setRunning(bool running);
     void redraw();
     void chooseClimate();
+    void inputsChanged();
 
     ProjectDocument* m_document;
     UnitSystem* m_units;
     HeatRecoveryComparisonModel* m_model;
     ComparisonRunner* m_runner;
+    HeatRecoveryOptionsModel* m_inputsModel;
+    HeatRecoveryOptionsPanel* m_optionsPanel;
+    HeatRecoveryPricesPanel* m_pricesPanel;
+    QTabWidget* m_tabs;
+    QSettings* m_store = nullptr;
     QSplitter* m_split;
     QTableView* m_table;
     QCustomPlot* m_plot;
