@@ -241,7 +241,9 @@ void MainWindow::createActions()
     m_exportAction->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_E));
     m_exportAction->setStatusTip(tr("Write the section schedule as PDF (A4 or Letter, in the display units) or CSV"));
     connect(m_exportAction, &QAction::triggered, this, [this] {
-        const QString file = ScheduleExport::run(this, *m_document, m_units->system());
+        const auto* view = findChild<HeatRecoveryComparisonView*>();
+        const QString file =
+            ScheduleExport::run(this, *m_document, m_units->system(), view ? view->currentResult() : nullptr);
         if (!file.isEmpty())
             statusBar()->showMessage(tr("Schedule written to %1").arg(QDir::toNativeSeparators(file)), 8000);
     });

@@ -3,6 +3,7 @@
 #include "../views/DemoProject.h"
 #include "PdfText.h"
 
+#include "airwright/cli/CompareHrCommand.h"
 #include "airwright/cli/ScheduleCsv.h"
 #include "airwright/ui/ProjectDocument.h"
 #include "airwright/ui/export/ScheduleExport.h"
@@ -12,6 +13,8 @@
 #include <QTemporaryDir>
 
 #include <gtest/gtest.h>
+
+#include <sstream>
 
 using namespace Airwright;
 using Airwright::Ui::ScheduleExport;
@@ -56,6 +59,22 @@ TEST_F(ScheduleExportTest, PdfOnLetterPaperNamesTheSections)
     const QString text = Ui::Test::PdfText::text(file);
     for (const auto& s : document.project().unit.supply)
         EXPECT_TRUE(text.contains(QString::fromStdString(s.id))) << s.id;
+}
+
+TEST_F(ScheduleExportTest, PdfCarriesAComparisonWhenGiven)
+{
+    if (!Ui::Test::PdfText::toolsAvailable())
+        GTEST_SKIP() << "poppler-utils not found";
+    std::ostringstream warnings;
+    const auto comparison = Cli::CompareHrCommand::compareWithDefaults(
+        document.project(), std::string(AIRWRIGHT_SOURCE_DIR) + "/resources/demo/demo-bins.csv", warnings);
+    const QString file = dir.filePath(QStringLiteral("with-comparison.pdf"));
+    EXPECT_TRUE(ScheduleExport::write(document, file, ScheduleExport::Format::PdfA4, Ui::UnitSystem::System::SI,
+                                      &comparison)
+                    .isEmpty());
+    const QString text = Ui::Test::PdfText::text(file).simplified();
+    EXPECT_TRUE(text.contains(QStringLiteral("Heat recovery options over a year")));
+    EXPECT_TRUE(text.contains(QStringLiteral("rotary wheel, hygroscopic")));
 }
 
 TEST_F(ScheduleExportTest, AFolderThatDoesNotExistIsReported)

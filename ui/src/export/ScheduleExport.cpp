@@ -15,7 +15,7 @@
 namespace Airwright::Ui {
 
 QString ScheduleExport::write(const ProjectDocument& document, const QString& file, Format format,
-                              UnitSystem::System units)
+                              UnitSystem::System units, const Core::Annual::ComparisonResult* comparison)
 {
     const auto& result = document.result();
     if (!result) {
@@ -36,6 +36,8 @@ QString ScheduleExport::write(const ProjectDocument& document, const QString& fi
         SchedulePdf::Options options;
         options.paper = format == Format::PdfLetter ? SchedulePdf::Paper::Letter : SchedulePdf::Paper::A4;
         options.units = units;
+        if (comparison)
+            options.comparison = *comparison;
         SchedulePdf::write(file, document.project(), *result, options);
         if (!QFileInfo(file).isFile())
             return QObject::tr("Cannot write %1.").arg(file);
@@ -45,7 +47,8 @@ QString ScheduleExport::write(const ProjectDocument& document, const QString& fi
     }
 }
 
-QString ScheduleExport::run(QWidget* parent, const ProjectDocument& document, UnitSystem::System units)
+QString ScheduleExport::run(QWidget* parent, const ProjectDocument& document, UnitSystem::System units,
+                           const Core::Annual::ComparisonResult* comparison)
 {
     const QString pdfA4 = QObject::tr("PDF schedule, A4 paper (*.pdf)");
     const QString pdfLetter = QObject::tr("PDF schedule, Letter paper (*.pdf)");
@@ -64,7 +67,7 @@ QString ScheduleExport::run(QWidget* parent, const ProjectDocument& document, Un
     const QString suffix = format == Format::Csv ? QStringLiteral(".csv") : QStringLiteral(".pdf");
     if (!file.endsWith(suffix, Qt::CaseInsensitive))
         file += suffix;
-    const QString error = write(document, file, format, units);
+    const QString error = write(document, file, format, units, comparison);
     if (!error.isEmpty()) {
         QMessageBox::warning(parent, QObject::tr("Export Section Schedule"), error);
         return {};

@@ -412,4 +412,11 @@ void HeatRecoveryComparisonView::redraw()
     m_plot->replot();
 }
 
+const Core::Annual::ComparisonResult* HeatRecoveryComparisonView::currentResult() const
+{
+    if (m_stale || !m_model->result())
+        return nullptr;
+    return &*m_model->result();
+}
+
 } // namespace Airwright::Ui

@@ -40,6 +40,9 @@ public:
     HeatRecoveryComparisonView(ProjectDocument* document, UnitSystem* units, QWidget* parent = nullptr);
 
     HeatRecoveryComparisonModel* model() const { return m_model; }
+    // The comparison shown, when it is of the project as it is now (for the
+    // printed schedule); empty while none has run or after an edit.
+    const Core::Annual::ComparisonResult* currentResult() const;
     ComparisonRunner* runner() const { return m_runner; }
     QCustomPlot* plot() const { return m_plot; }
     HeatRecoveryOptionsModel* inputsModel() const { return m_inputsModel; }
