@@ -28,6 +28,7 @@
 #include "airwright/ui/views/PsychroChartView.h"
 #include "airwright/ui/export/ScheduleExport.h"
 #include "airwright/ui/views/ScheduleView.h"
+#include "airwright/ui/views/MessageUnits.h"
 
 #include <QAction>
 #include <QDir>
@@ -617,7 +618,7 @@ void MainWindow::updateStatus()
         return;
     const auto& result = m_document->result();
     if (!result) {
-        m_statusLabel->setText(tr("Not computed: %1").arg(m_document->computeError()));
+        m_statusLabel->setText(tr("Not computed: %1").arg(MessageUnits::toDisplay(m_document->computeError(), *m_units)));
         m_statusLabel->setStyleSheet(QStringLiteral("color: #d03030;"));
         return;
     }

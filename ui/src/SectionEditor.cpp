@@ -9,6 +9,7 @@
 #include "airwright/ui/SectionFields.h"
 #include "airwright/ui/SectionPaths.h"
 #include "airwright/ui/UnitSystem.h"
+#include "airwright/ui/views/MessageUnits.h"
 
 #include <QHeaderView>
 #include <QLabel>
@@ -189,7 +190,7 @@ void SectionEditor::refreshResults()
     if (!result || result->cases.empty()) {
         m_resultsTitle->setText(tr("Results"));
         m_results->setRowCount(1);
-        m_results->setItem(0, 0, new QTableWidgetItem(tr("not computed: %1").arg(m_document->computeError())));
+        m_results->setItem(0, 0, new QTableWidgetItem(tr("not computed: %1").arg(MessageUnits::toDisplay(m_document->computeError(), *m_units))));
         m_results->setFixedHeight(m_results->horizontalHeader()->height() + m_results->rowHeight(0) + 4);
         return;
     }

@@ -7,6 +7,7 @@
 #include "airwright/ui/SectionPaths.h"
 #include "airwright/ui/SectionSymbol.h"
 #include "airwright/ui/UnitSystem.h"
+#include "airwright/ui/views/MessageUnits.h"
 
 #include <QApplication>
 #include <QDrag>
@@ -538,7 +539,7 @@ void UnitDrawing::paintEvent(QPaintEvent*)
         p.drawText(line2, Qt::AlignLeft | Qt::AlignVCenter, fm.elidedText(second, Qt::ElideRight, line2.width()));
     } else {
         p.setPen(QColor(0xd0, 0x30, 0x30));
-        const QString message = tr("Not computed: %1").arg(m_document->computeError());
+        const QString message = tr("Not computed: %1").arg(MessageUnits::toDisplay(m_document->computeError(), *m_units));
         p.drawText(QRectF(line1.topLeft(), line2.bottomRight()), Qt::AlignLeft | Qt::AlignTop | Qt::TextWordWrap,
                    message);
     }

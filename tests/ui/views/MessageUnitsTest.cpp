@@ -41,6 +41,10 @@ INSTANTIATE_TEST_SUITE_P(
         MessageRow{"si_celsius", false, "air reaches this water coil at 1.9 C: protect it",
                    "air reaches this water coil at 1.9 °C: protect it"},
         MessageRow{"si_airflow", false, "design flow 9000 m3/h", "design flow 9000 m³/h"},
+        // 1 MWh = 3.412142 MMBtu (1 Btu = 1055.056 J, NIST SP 811).
+        MessageRow{"si_energy_a_year", false, "saves 233.6 MWh/a delivered energy", "saves 233.6 MWh/a delivered energy"},
+        MessageRow{"ip_energy_a_year", true, "saves 233.6 MWh/a delivered energy", "saves 797.1 MMBtu/a delivered energy"},
+        MessageRow{"ip_energy", true, "gives up 13.9 MWh in 655 frost hours", "gives up 47.4 MMBtu in 655 frost hours"},
         MessageRow{"si_pressure_unchanged", false, "final drop 250 Pa reached", "final drop 250 Pa reached"},
         // NIST SP 811 B.9: t/°F = 1.8 t/°C + 32; 1.9 -> 35.42, -12.0 -> 10.4.
         MessageRow{"ip_celsius", true, "air reaches this water coil at 1.9 C: protect it",

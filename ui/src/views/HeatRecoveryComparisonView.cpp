@@ -1,4 +1,5 @@
 #include "airwright/ui/views/HeatRecoveryComparisonView.h"
+#include "airwright/ui/views/MessageUnits.h"
 
 #include "airwright/core/InputError.h"
 #include "airwright/ui/ProjectDocument.h"
@@ -213,7 +214,7 @@ void HeatRecoveryComparisonView::runNow()
     if (!m_document->result()) {
         m_runner->cancel();
         m_model->setResult(std::nullopt, m_evaluationYears);
-        const QString why = m_document->computeError();
+        const QString why = MessageUnits::toDisplay(m_document->computeError(), *m_units);
         m_status->setText(tr("Not compared: the project has no results%1").arg(why.isEmpty() ? QString()
                                                                                              : QStringLiteral(" (%1)").arg(why)));
         redraw();
@@ -311,7 +312,7 @@ void HeatRecoveryComparisonView::showResult(const ComparisonResult& result)
         for (const auto& o : result.options)
             if (o.key == best.key)
                 name = QString::fromStdString(o.name);
-        text += tr("Best: %1, %2. ").arg(name, QString::fromStdString(best.reason));
+        text += tr("Best: %1, %2. ").arg(name, MessageUnits::toDisplay(QString::fromStdString(best.reason), *m_units));
     }
     const auto& inputs = m_inputsModel->inputs();
     const auto& p = inputs.settings().prices;

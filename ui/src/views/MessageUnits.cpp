@@ -53,12 +53,26 @@ QString MessageUnits::toDisplay(const QString& siMessage, const UnitSystem& unit
     // An optional "a .. " range start, a number, an optional space and a unit that
     // is not the start of a longer word or a compound unit.
     static const QRegularExpression pattern(QStringLiteral(
-        R"((?<![\w.])(?:(-?\d+(?:\.\d+)?) ?\.\. ?)?(-?\d+(?:\.\d+)?) ?(°C|C|K|Pa|kW|m3/h|m³/h|l/s|kg/s|kg/h|m/s|g/kg)(?![\w/(³²]))"));
+        R"((?<![\w.])(?:(-?\d+(?:\.\d+)?) ?\.\. ?)?(-?\d+(?:\.\d+)?) ?(MWh/a|MWh|°C|C|K|Pa|kW|m3/h|m³/h|l/s|kg/s|kg/h|m/s|g/kg)(?![\w/(³²]))"));
     QString out;
     qsizetype last = 0;
     auto it = pattern.globalMatch(siMessage);
     while (it.hasNext()) {
         const QRegularExpressionMatch m = it.next();
+        if (m.captured(3).startsWith(QLatin1String("MWh"))) {
+            // Energy a year (the heat recovery comparison): MWh, or million Btu in
+            // IP (1 MWh = 3.412142 MMBtu, NIST SP 811 via 1 Btu = 1055.056 J).
+            if (units.system() == UnitSystem::System::IP) {
+                out += siMessage.mid(last, m.capturedStart() - last);
+                auto mmbtu = [](const QString& mwh) { return QString::number(mwh.toDouble() * 3.412142, 'f', 1); };
+                if (m.capturedLength(1) > 0)
+                    out += mmbtu(m.captured(1)) + QStringLiteral(" .. ");
+                out += mmbtu(m.captured(2)) + QStringLiteral(" MMBtu")
+                       + (m.captured(3).endsWith(QLatin1String("/a")) ? QStringLiteral("/a") : QString());
+                last = m.capturedEnd();
+            }
+            continue;
+        }
         const auto kind = kindOf(m.captured(3));
         if (!kind)
             continue;

@@ -3,6 +3,7 @@
 #include "airwright/ui/ProjectDocument.h"
 #include "airwright/ui/UnitSystem.h"
 #include "airwright/ui/views/PlotStyle.h"
+#include "airwright/ui/views/MessageUnits.h"
 
 #include <QComboBox>
 #include <QEvent>
@@ -237,7 +238,7 @@ void PressureProfileView::redraw()
     m_plot->axisRect()->insetLayout()->setInsetAlignment(0, Qt::AlignTop | Qt::AlignLeft);
 
     if (m_model.isEmpty()) {
-        const QString why = m_document->computeError();
+        const QString why = MessageUnits::toDisplay(m_document->computeError(), *m_units);
         auto* item = new QCPItemText(m_plot);
         item->position->setType(QCPItemPosition::ptAxisRectRatio);
         item->position->setCoords(0.5, 0.5);

@@ -3,6 +3,7 @@
 #include "airwright/ui/ProjectDocument.h"
 #include "airwright/ui/UnitSystem.h"
 #include "airwright/ui/views/PlotStyle.h"
+#include "airwright/ui/views/MessageUnits.h"
 
 #include <QButtonGroup>
 #include <QEvent>
@@ -275,7 +276,7 @@ void PsychroChartView::redraw()
         0, tw ? (Qt::AlignTop | Qt::AlignLeft) : (Qt::AlignBottom | Qt::AlignRight));
 
     if (!m_document->result()) {
-        const QString why = m_document->computeError();
+        const QString why = MessageUnits::toDisplay(m_document->computeError(), *m_units);
         auto* item = new QCPItemText(m_plot);
         item->position->setType(QCPItemPosition::ptAxisRectRatio);
         item->position->setCoords(0.5, 0.5);
