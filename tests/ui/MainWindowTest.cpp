@@ -235,6 +235,8 @@ TEST_F(MainWindowTest, ScreenshotsOfEveryPanel)
     EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/heat-recovery-comparison-prices.png"))));
     EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/psychrometric-chart-hx.png"))));
     EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/main-window-dark.png"))));
+    EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/measuring-points.png"))));
+    EXPECT_TRUE(files.contains(dir.filePath(QStringLiteral("shots/measuring-points-ip.png"))));
     // Left as it was found: SI, light.
     EXPECT_EQ(window.units()->system(), UnitSystem::System::SI);
     EXPECT_FALSE(window.settings()->darkPalette());

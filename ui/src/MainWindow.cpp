@@ -24,6 +24,7 @@
 #include "airwright/ui/UnitSystem.h"
 #include "airwright/ui/views/FindingsView.h"
 #include "airwright/ui/views/HeatRecoveryComparisonView.h"
+#include "airwright/ui/views/MeasuringPointsView.h"
 #include "airwright/ui/views/PressureProfileView.h"
 #include "airwright/ui/views/PsychroChartView.h"
 #include "airwright/ui/export/ScheduleExport.h"
@@ -156,6 +157,9 @@ void MainWindow::createPanels()
     m_views->addTab(chart, tr("Psychrometric chart"));
     m_views->addTab(profile, tr("Pressure profile"));
     m_views->addTab(schedule, tr("Section schedule"));
+    auto* points = new MeasuringPointsView(m_document, m_units, m_views);
+    points->setObjectName(QStringLiteral("measuring-points"));
+    m_views->addTab(points, tr("Measuring points"));
     m_views->addTab(findings, tr("Findings"));
     m_views->addTab(comparison, tr("Heat recovery comparison"));
     connect(m_unitPanel, &UnitPanel::caseIndexChanged, this, [profile, schedule, this](int index) {

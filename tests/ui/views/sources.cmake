@@ -5,6 +5,7 @@ list(APPEND AIRWRIGHT_UI_TEST_SOURCES
     ui/views/PsychroChartModelTest.cpp
     ui/views/PressureProfileModelTest.cpp
     ui/views/ScheduleModelTest.cpp
+    ui/views/MeasuringPointsModelTest.cpp
     ui/views/FindingsModelTest.cpp
     ui/views/MessageUnitsTest.cpp
     ui/views/HeatRecoveryComparisonTest.cpp

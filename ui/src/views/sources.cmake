@@ -15,6 +15,10 @@ list(APPEND AIRWRIGHT_UI_SOURCES
     src/views/ScheduleModel.cpp
     include/airwright/ui/views/ScheduleView.h
     src/views/ScheduleView.cpp
+    include/airwright/ui/views/MeasuringPointsModel.h
+    src/views/MeasuringPointsModel.cpp
+    include/airwright/ui/views/MeasuringPointsView.h
+    src/views/MeasuringPointsView.cpp
     include/airwright/ui/views/FindingsModel.h
     src/views/FindingsModel.cpp
     include/airwright/ui/views/FindingsView.h
