@@ -3,6 +3,7 @@
 #include "airwright/core/InputError.h"
 #include "airwright/ui/UnitSystem.h"
 #include "airwright/ui/views/MessageUnits.h"
+#include "airwright/ui/views/TabSeparatedText.h"
 
 #include <QStringList>
 
@@ -65,14 +66,6 @@ const char* columnTitle(int column)
     default:
         return "";
     }
-}
-
-QString cleanCell(QString s)
-{
-    s.replace(QLatin1Char('\t'), QLatin1Char(' '));
-    s.replace(QLatin1Char('\n'), QLatin1Char(' '));
-    s.replace(QLatin1Char('\r'), QLatin1Char(' '));
-    return s;
 }
 
 } // namespace
@@ -242,24 +235,11 @@ QVariant MeasuringPointsModel::headerData(int section, Qt::Orientation orientati
 
 QString MeasuringPointsModel::toTsv(const QList<int>& rows) const
 {
-    QStringList lines;
     QStringList header;
     for (int c = 0; c < ColumnCount; ++c)
-        header.push_back(cleanCell(headerData(c, Qt::Horizontal).toString()));
-    lines.push_back(header.join(QLatin1Char('\t')));
-    QList<int> order = rows;
-    if (order.isEmpty())
-        for (int r = 0; r < int(m_points.size()); ++r)
-            order.push_back(r);
-    for (int r : order) {
-        if (r < 0 || r >= int(m_points.size()))
-            continue;
-        QStringList cells;
-        for (int c = 0; c < ColumnCount; ++c)
-            cells.push_back(cleanCell(text(m_points[std::size_t(r)], c)));
-        lines.push_back(cells.join(QLatin1Char('\t')));
-    }
-    return lines.join(QLatin1Char('\n')) + QLatin1Char('\n');
+        header.push_back(headerData(c, Qt::Horizontal).toString());
+    return TabSeparatedText::write(header, int(m_points.size()), rows,
+                                   [this](int r, int c) { return text(m_points[std::size_t(r)], c); });
 }
 
 void MeasuringPointsModel::unitsChanged()

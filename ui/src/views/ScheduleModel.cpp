@@ -1,6 +1,7 @@
 #include "airwright/ui/views/ScheduleModel.h"
 
 #include "airwright/ui/UnitSystem.h"
+#include "airwright/ui/views/TabSeparatedText.h"
 
 namespace Airwright::Ui {
 
@@ -81,14 +82,6 @@ std::optional<double> siValue(const Core::Chain::SectionResult& r, int column)
     default:
         return std::nullopt;
     }
-}
-
-QString cleanCell(QString s)
-{
-    s.replace(QLatin1Char('\t'), QLatin1Char(' '));
-    s.replace(QLatin1Char('\n'), QLatin1Char(' '));
-    s.replace(QLatin1Char('\r'), QLatin1Char(' '));
-    return s;
 }
 
 } // namespace
@@ -248,24 +241,11 @@ QList<int> ScheduleModel::rowsOf(const QString& sectionId) const
 
 QString ScheduleModel::toTsv(const QList<int>& rows) const
 {
-    QStringList lines;
     QStringList header;
     for (int c = 0; c < ColumnCount; ++c)
-        header.push_back(cleanCell(headerData(c, Qt::Horizontal).toString()));
-    lines.push_back(header.join(QLatin1Char('\t')));
-    QList<int> order = rows;
-    if (order.isEmpty())
-        for (int r = 0; r < int(m_rows.size()); ++r)
-            order.push_back(r);
-    for (int r : order) {
-        if (r < 0 || r >= int(m_rows.size()))
-            continue;
-        QStringList cells;
-        for (int c = 0; c < ColumnCount; ++c)
-            cells.push_back(cleanCell(text(m_rows[std::size_t(r)], c)));
-        lines.push_back(cells.join(QLatin1Char('\t')));
-    }
-    return lines.join(QLatin1Char('\n')) + QLatin1Char('\n');
+        header.push_back(headerData(c, Qt::Horizontal).toString());
+    return TabSeparatedText::write(header, int(m_rows.size()), rows,
+                                   [this](int r, int c) { return text(m_rows[std::size_t(r)], c); });
 }
 
 void ScheduleModel::unitsChanged()

@@ -41,4 +41,6 @@ list(APPEND AIRWRIGHT_UI_SOURCES
     src/views/HeatRecoveryPricesPanel.cpp
     include/airwright/ui/views/HeatRecoveryComparisonView.h
     src/views/HeatRecoveryComparisonView.cpp
+    include/airwright/ui/views/TabSeparatedText.h
+    src/views/TabSeparatedText.cpp
 )
