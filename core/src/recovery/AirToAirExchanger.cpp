@@ -32,6 +32,10 @@ constexpr double kTypicalUpperEfficiency = 0.90;
 // Temperature tolerance of the wet-surface solve, K: far below any measurement,
 // and the energy balance closes exactly whatever it is (see coolWarmStream).
 constexpr double kWetSolveTolerance = 1e-4;
+// The solve ends without a further evaluation once an interpolation step is
+// shorter than this (BracketedRoot.h); the returned outlet is then typically
+// within 1e-6 K of the root (the secant's superlinear convergence).
+constexpr double kWetSolveAcceptStep = 1e-3;
 
 // Dry-air basis cp of moist air, the slope of ASHRAE eq. 30 at constant W.
 double moistCp(double w) { return raw::enthalpy(1.0, w) - raw::enthalpy(0.0, w); }
@@ -66,6 +70,9 @@ struct WarmOutcome {
     double wOut = 0.0;
     double condensate = 0.0; // kg/s
     double b = 1.0;
+    // b of the last rate() call: equal to b within the solve tolerance; a caller
+    // that asks rate's kernel again (the cold corner) finds it in its memo.
+    double bLastRate = 1.0;
 };
 
 // warmDewPoint(): of the warm inlet, C (computed at most once per evaluation,
@@ -74,6 +81,7 @@ template <class Rate, class DewPoint>
 WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewPoint, Rate rate)
 {
     const double cw = warm.capacity();
+    double bLastRate = 1.0;
     const double qDry = rate(1.0);
     const double tDry = warm.t - qDry / cw;
     // Saturation humidity ratio, remembering the last two: the solve asks again
@@ -94,7 +102,7 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewP
         return lastWs[1];
     };
     if (warm.w <= lastWs[0])
-        return {qDry, tDry, warm.w, 0.0, 1.0};
+        return {qDry, tDry, warm.w, 0.0, 1.0, 1.0};
 
     const double hIn = raw::enthalpy(warm.t, warm.w);
     auto qAir = [&](double t) {
@@ -109,7 +117,8 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewP
     };
     auto g = [&](double t) {
         const double q = qAir(t);
-        return rate(meanSlope(t, q)) - q;
+        bLastRate = meanSlope(t, q);
+        return rate(bLastRate) - q;
     };
     // g > 0 above the root (the surface could take more), g <= 0 at the cold inlet
     // (no rate exceeds b C_warm dT there). Above the dew point b = 1 and
@@ -130,10 +139,11 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewP
         hi = std::min(warmDewPoint(), warm.t);
         fHi = qDry - cw * (warm.t - hi); // b = 1 at the dew point: no rate call needed
     }
-    const double t = hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance).x;
+    const double t =
+        hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance, 100, kWetSolveAcceptStep).x;
     const double q = qAir(t);
     const double ws = std::min(warm.w, satW(t));
-    return {q, t, ws, warm.m * (warm.w - ws), meanSlope(t, q)};
+    return {q, t, ws, warm.m * (warm.w - ws), meanSlope(t, q), bLastRate};
 }
 
 // Unmixed cross-flow effectiveness of the last few (NTU, Cr) pairs: within one
@@ -394,7 +404,7 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
             (extractWarm ? tsOut : teOut) = cold.t + w.q / cCold;
             if (frostFigures) {
                 // Cold corner with the converged wet-side augmentation.
-                const double cw = w.b * cWarm, haW = w.b * haWarm;
+                const double cw = w.bLastRate * cWarm, haW = w.bLastRate * haWarm;
                 const double ua = 1.0 / (1.0 / haW + 1.0 / haCold);
                 const double cmin = std::min(cw, cCold), cmax = std::max(cw, cCold);
                 const double n = std::min(ua / cmin, kMaxNtu), cr = cmin / cmax;
@@ -579,8 +589,19 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
         return p;
     };
     auto at = [&](double c) { return evaluate(pointAt(c)); };
+    // The last two evaluations of the solve, for the local slope it reports.
+    double lastC[2] = {0.0, 0.0}, lastT[2] = {0.0, 0.0};
+    int evaluations = 0;
     // Only the supply outlet temperature matters inside the solve.
-    auto tOutAt = [&](double c) { return toCelsius(figures(pointAt(c), false).supplyOutlet); };
+    auto tOutAt = [&](double c) {
+        const double t = toCelsius(figures(pointAt(c), false).supplyOutlet);
+        lastC[1] = lastC[0];
+        lastT[1] = lastT[0];
+        lastC[0] = c;
+        lastT[0] = t;
+        ++evaluations;
+        return t;
+    };
     const double tIn = toCelsius(point.supplyInlet.dryBulb());
     const double target = toCelsius(setpoint);
     checkRange("supply temperature setpoint", target, Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC, "C",
@@ -588,15 +609,30 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
     const double tFull = start && start->fullRecoveryOutlet ? toCelsius(*start->fullRecoveryOutlet) : tOutAt(full);
     const double reach = tFull - tIn;
     const double want = target - tIn;
+    const double chord = reach / (full - none);
+    // The result with what the solve learnt on the way.
+    auto result = [&](double c, bool reached) {
+        SetpointControlResult r{fraction(c), reached, at(c), celsius(tFull), std::nullopt};
+        if (evaluations >= 2 && lastC[0] != lastC[1]) {
+            const double slope = (lastT[0] - lastT[1]) / (lastC[0] - lastC[1]);
+            if (slope * chord > 0.0 && std::isfinite(slope))
+                r.outletChangePerControl = kelvinDifference(slope);
+        }
+        return r;
+    };
     constexpr double tolerance = 1e-6; // K
     constexpr double controlTolerance = 1e-9;
+    // Interpolation steps shorter than this end the solve (BracketedRoot.h): the
+    // outlet is then within about 1e-9 K of the setpoint, without the evaluations
+    // that only shrink the bracket around it.
+    constexpr double acceptStep = 1e-7;
 
     if (reach * want <= 0.0 || std::abs(reach) < tolerance) {
         // Recovery would move away from the setpoint (or cannot move at all).
-        return {fraction(none), std::abs(want) < tolerance, at(none)};
+        return result(none, std::abs(want) < tolerance);
     }
     if (std::abs(want) >= std::abs(reach))
-        return {fraction(full), std::abs(want - reach) < tolerance, at(full)};
+        return result(full, std::abs(want - reach) < tolerance);
 
     auto f = [&](double c) { return tOutAt(c) - target; };
     if (start) {
@@ -607,8 +643,13 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
         double x0 = std::clamp(toFraction(start->control), lower, upper);
         double f0 = f(x0);
         if (f0 == 0.0)
-            return {fraction(x0), true, at(x0)};
-        double slope = reach / (full - none);
+            return result(x0, true);
+        double slope = chord;
+        if (start->outletChangePerControl) {
+            const double known = start->outletChangePerControl->value();
+            if (known * chord > 0.0 && std::isfinite(known))
+                slope = known;
+        }
         for (int step = 0; step < 4; ++step) {
             const double secant = x0 - f0 / slope;
             const double past = std::max(1e-3 * std::abs(secant - x0), 2.0 * controlTolerance);
@@ -617,8 +658,8 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
                 break;
             const double f1 = f(x1);
             if ((f1 > 0.0) != (f0 > 0.0) || f1 == 0.0) {
-                const double c = findBracketedRoot(f, x0, x1, f0, f1, controlTolerance).x;
-                return {fraction(c), true, at(c)};
+                const double c = findBracketedRoot(f, x0, x1, f0, f1, controlTolerance, 100, acceptStep).x;
+                return result(c, true);
             }
             if (f1 == f0)
                 break;
@@ -627,8 +668,8 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
             f0 = f1;
         }
     }
-    const double c = findBracketedRoot(f, none, full, -want, reach - want, controlTolerance).x;
-    return {fraction(c), true, at(c)};
+    const double c = findBracketedRoot(f, none, full, -want, reach - want, controlTolerance, 100, acceptStep).x;
+    return result(c, true);
 }
 
 std::optional<AbsoluteTemperature>

@@ -22,6 +22,9 @@ Ratio regulationMinimum(ExchangerKind kind)
 
 // Control resolution of frost protection (bypass share, rotor speed, supply share).
 constexpr double kControlTolerance = 1e-4;
+// An interpolation step this short ends those solves (BracketedRoot.h): the root
+// is then found far more closely than the step that protection adds to it.
+constexpr double kAcceptStep = 0.25 * kControlTolerance;
 // Smallest rotor speed or bypass remainder the protection considers: at exactly
 // zero flow through the core the exchanger has no surface temperature to speak of.
 constexpr double kLeastControl = 1e-3;
@@ -160,7 +163,7 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
     } else if (m_spec.bypassControl && inputs.supplyTarget) {
         std::optional<AirToAirExchanger::ControlStart> start;
         if (memory && memory->m_control) {
-            start = AirToAirExchanger::ControlStart{*memory->m_control, {}};
+            start = AirToAirExchanger::ControlStart{*memory->m_control, {}, memory->m_outletChangePerControl};
             // Full recovery gives the same outlet as long as the streams are the same.
             if (memory->m_fullOutlet && memory->m_inputs && sameStream(memory->m_inputs->supplyIn, supplyIn)
                 && sameStream(memory->m_inputs->extractIn, extractIn))
@@ -179,15 +182,9 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
             const double want = toCelsius(*inputs.supplyTarget) - tIn;
             const double full = rotary ? 1.0 : 0.0;
             memory->m_fullReach.reset();
-            if (start && start->fullRecoveryOutlet) {
-                memory->m_fullOutlet = start->fullRecoveryOutlet;
-            } else {
-                ExchangerOperatingPoint fullPoint = point;
-                (rotary ? fullPoint.rotorSpeedRatio : fullPoint.bypassFraction) = fraction(rotary ? 1.0 : 0.0);
-                memory->m_fullOutlet = control.control.value() == (rotary ? 1.0 : 0.0)
-                                           ? performance.supplyOutlet.dryBulb()
-                                           : m_exchanger.controlFigures(fullPoint).supplyOutlet;
-            }
+            memory->m_fullOutlet = control.fullRecoveryOutlet;
+            if (control.outletChangePerControl)
+                memory->m_outletChangePerControl = control.outletChangePerControl;
             if (control.control.value() == full && reach * want > 0.0 && std::abs(reach) >= kReachTolerance
                 && std::abs(want) >= std::abs(reach))
                 memory->m_fullReach = reach;
@@ -234,7 +231,7 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
                 control = fraction(bySpeed ? 0.0 : 1.0); // nothing short of stopping recovery helps
             } else {
                 const auto root = findBracketedRoot(margin, frosting, safe, performance.frostMargin, safeMargin,
-                                                    kControlTolerance, 40);
+                                                    kControlTolerance, 40, kAcceptStep);
                 // Step to the frost-free side of the root.
                 const double x = bySpeed ? root.x - kControlTolerance : root.x + kControlTolerance;
                 control = fraction(std::clamp(x, 0.0, 1.0));
@@ -280,7 +277,7 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
             const double loMargin = margin(lo);
             if (loMargin >= 0.0) {
                 const auto root = findBracketedRoot(margin, lo, 1.0, loMargin, performance.frostMargin,
-                                                    kControlTolerance, 40);
+                                                    kControlTolerance, 40, kAcceptStep);
                 lo = std::max(kLeastSupplyShare, root.x - kControlTolerance);
             }
             out.findings.push_back({Severity::Warning, "frost.reduced_supply", "",

@@ -9,6 +9,7 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <optional>
 #include <string>
 
 using namespace Airwright::Core;
@@ -88,11 +89,26 @@ TEST(AirToAirExchanger, WarmStartedControlFindsTheSameRoot)
         ASSERT_TRUE(cold.setpointReached) << toString(kind);
         // Starts near, far, at either end, and one with the full-recovery outlet known.
         const auto fullOutlet = x.controlSupplyTemperature(p, celsius(40.0)).performance.supplyOutlet.dryBulb();
+        // The solve reports the full-recovery outlet it used and a slope of the sign
+        // of the chord from no to full recovery.
+        ASSERT_TRUE(cold.fullRecoveryOutlet.has_value()) << toString(kind);
+        EXPECT_NEAR(toCelsius(*cold.fullRecoveryOutlet), toCelsius(fullOutlet), 1e-9) << toString(kind);
+        ASSERT_TRUE(cold.outletChangePerControl.has_value()) << toString(kind);
+        const double chordSign = isRotary(kind) ? 1.0 : -1.0;
+        EXPECT_GT(cold.outletChangePerControl->value() * chordSign, 0.0) << toString(kind);
+        // Slopes given to the warm start: none, the one found, a poor one, one of
+        // the wrong sign (ignored).
+        const double found = cold.outletChangePerControl->value();
+        const std::optional<double> slopes[] = {std::nullopt, found, 5.0 * found, -found};
         for (double startAt : {toFraction(cold.control) + 1e-4, toFraction(cold.control) - 0.2, 0.0, 1.0}) {
-            for (bool knowFull : {false, true}) {
-                AirToAirExchanger::ControlStart start{fraction(startAt), {}};
+            for (int variant = 0; variant < 8; ++variant) {
+                const bool knowFull = variant % 2 == 1;
+                const std::optional<double> slope = slopes[variant / 2];
+                AirToAirExchanger::ControlStart start{fraction(startAt), {}, {}};
                 if (knowFull)
                     start.fullRecoveryOutlet = fullOutlet;
+                if (slope)
+                    start.outletChangePerControl = kelvinDifference(*slope);
                 const SetpointControlResult warm = x.controlSupplyTemperature(p, celsius(16.5), start);
                 EXPECT_TRUE(warm.setpointReached) << toString(kind) << " from " << startAt;
                 // Both solves stop within 1e-9 of the root.

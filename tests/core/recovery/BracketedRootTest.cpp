@@ -34,3 +34,19 @@ TEST(BracketedRoot, RootAtAnEnd)
     const auto r = findBracketedRoot([](double x) { return x - 2.0; }, 2.0, 5.0, 1e-12);
     EXPECT_EQ(r.x, 2.0);
 }
+
+TEST(BracketedRoot, AcceptingAShortInterpolationStepSavesEvaluations)
+{
+    // Dottie number as above (tolerance 1e-12): ending on an interpolation step
+    // shorter than 1e-6 gives the root far closer than that step, with fewer
+    // evaluations than collapsing the bracket to 1e-13.
+    const auto f = [](double x) { return std::cos(x) - x; };
+    const auto full = findBracketedRoot(f, 0.0, 1.0, f(0.0), f(1.0), 1e-13);
+    const auto early = findBracketedRoot(f, 0.0, 1.0, f(0.0), f(1.0), 1e-13, 100, 1e-6);
+    EXPECT_NEAR(early.x, 0.7390851332151607, 1e-12);
+    EXPECT_LT(early.evaluations, full.evaluations);
+    // On a step function an accepted step still ends within that step of the jump.
+    const auto step = findBracketedRoot([](double x) { return x < 0.3 ? -1.0 : 1.0; }, 0.0, 1.0, -1.0, 1.0, 1e-10,
+                                        100, 1e-3);
+    EXPECT_NEAR(step.x, 0.3, 1e-3);
+}

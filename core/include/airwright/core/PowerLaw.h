@@ -26,7 +26,9 @@ inline double powerLaw(double ratio, double exponent)
         const double root = std::sqrt(ratio);
         return ratio * root * std::sqrt(root);
     }
-    return std::pow(ratio, exponent);
+    // exp(x ln r) rather than pow: within a few ulps for the ratios of flow
+    // scaling (0.01 .. 100), and about half the cost of glibc's pow.
+    return std::exp(exponent * std::log(ratio));
 }
 
 } // namespace Airwright::Core

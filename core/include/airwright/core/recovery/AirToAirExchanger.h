@@ -72,11 +72,14 @@ public:
     // the supply outlet to the setpoint without overshooting it, by a bracketed
     // solve between zero and full recovery (the rest of the point unchanged).
     // A warm start (the chain's previous pass): where to start looking, and the
-    // supply outlet at full recovery if already known for this very point. It only
-    // saves evaluations: the result is the same root to the same tolerance.
+    // supply outlet at full recovery if already known for this very point, and the
+    // outlet's change per unit of control found last time (the first secant step
+    // uses it instead of the chord from no to full recovery). It only saves
+    // evaluations: the result is the same root to the same tolerance.
     struct ControlStart {
         Ratio control;
         std::optional<AbsoluteTemperature> fullRecoveryOutlet;
+        std::optional<TemperatureDifference> outletChangePerControl;
     };
     SetpointControlResult controlSupplyTemperature(const ExchangerOperatingPoint& point, AbsoluteTemperature setpoint,
                                                    const std::optional<ControlStart>& start = std::nullopt) const;

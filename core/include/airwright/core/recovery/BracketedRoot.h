@@ -19,9 +19,15 @@ struct BracketedRoot {
 // classic form (Brent 1973, "Algorithms for minimization without derivatives",
 // ch. 4): the bracket [b, c] always holds the root, steps shorter than the
 // tolerance are lengthened to it, so the bracket collapses to xTolerance.
+//
+// acceptStepBelow > 0: an interpolation step (secant or inverse quadratic, never
+// a bisection) shorter than this ends the search at the step's end without
+// evaluating f there. Near a smooth root these steps converge superlinearly, so
+// the returned x is far closer to the root than the step; it saves the last
+// evaluation or two that only confirm the bracket. The caller must not need f(x).
 template <class F>
 BracketedRoot findBracketedRoot(F&& f, double lo, double hi, double fLo, double fHi, double xTolerance,
-                                int maxEvaluations = 100)
+                                int maxEvaluations = 100, double acceptStepBelow = 0.0)
 {
     BracketedRoot out;
     double a = lo, b = hi, fa = fLo, fb = fHi;
@@ -61,6 +67,10 @@ BracketedRoot findBracketedRoot(F&& f, double lo, double hi, double fLo, double 
             if (2.0 * p < std::min(3.0 * half * q - std::abs(tol * q), std::abs(e * q))) {
                 e = d;
                 d = p / q;
+                if (std::abs(d) < acceptStepBelow) {
+                    out.x = b + d;
+                    return out;
+                }
             } else {
                 d = e = half;
             }

@@ -70,6 +70,7 @@ public:
         std::optional<double> m_fullReach;
         std::optional<Ratio> m_control; // bypass or rotor speed the control found
         std::optional<AbsoluteTemperature> m_fullOutlet; // supply outlet at full recovery, for m_inputs' streams
+        std::optional<TemperatureDifference> m_outletChangePerControl; // slope the last control solve found
     public:
         // Outcomes computed (not taken from memory), for tests and benchmarks.
         int evaluations = 0;
