@@ -3,6 +3,7 @@
 #include "airwright/cli/ArgumentList.h"
 #include "airwright/cli/ExitCode.h"
 #include "airwright/core/InputError.h"
+#include "airwright/core/chain/ChainSolver.h"
 #include "airwright/core/project/ProjectFile.h"
 #include "airwright/core/project/ProjectFileError.h"
 
@@ -50,7 +51,11 @@ std::string ValidateCommand::help() const
            "Reads an Airwright project file (.awproj) with every check the program applies\n"
            "when it opens one: JSON syntax, format and version, required keys, JSON types,\n"
            "allowed ranges, unique section ids, coupled sections and their extract-path\n"
-           "markers. Every problem is reported, not only the first, as\n"
+           "markers. A file that passes these is then computed for every design case, as\n"
+           "compute would, to find what only a computed case shows (more air recirculated\n"
+           "than the extract path brings at a case's airflow, a fan that would heat the air\n"
+           "beyond 200 C): a file that validate accepts, compute computes. Every problem is\n"
+           "reported, not only the first, as\n"
            "  FILE: PATH: MESSAGE\n"
            "where PATH is the place in the file, e.g. supply[3].final_dp_Pa.\n"
            "\n"
@@ -89,6 +94,11 @@ int ValidateCommand::run(const std::vector<std::string>& args, std::ostream& out
     }
     for (const auto& warning : report.warnings)
         err << file << ": warning: " << warning.text() << "\n";
+    const auto problems = Chain::ChainSolver::check(project.unit);
+    for (const auto& problem : problems)
+        err << file << ": " << (problem.path.empty() ? "" : problem.path + ": ") << problem.message << "\n";
+    if (!problems.empty())
+        return InvalidInput;
     out << file << ": valid (" << counted(sectionCount(project.unit), "section", "sections") << ", "
         << counted(project.unit.cases.size(), "case", "cases") << ")\n";
     return Done;

@@ -87,6 +87,23 @@ protected:
         writeText(s_dir / "range.awproj", replaced(demo, "\"rh_pct\": 90", "\"rh_pct\": 120"));
         writeText(s_dir / "unknown-key.awproj", replaced(demo, "\"altitude_m\": 250", "\"altitude_m\": 250, \"colour\": 1"));
         writeText(s_dir / "newer.awproj", replaced(demo, "\"format_version\": 1", "\"format_version\": 2"));
+        writeText(s_dir / "altitude.awproj", replaced(demo, "\"altitude_m\": 250", "\"altitude_m\": 6000"));
+        // Recirculation that the extract path can feed at 100 % airflow but not at
+        // the 150 % of the winter case, where the minimum outdoor air is a smaller share.
+        std::string recirculation = replaced(demo, "\"extract_m3h\": 9000", "\"extract_m3h\": 5000");
+        recirculation = replaced(recirculation, "\"supply\": [",
+                                 "\"supply\": [{\"id\": \"mix\", \"type\": \"mixing\", \"outdoor_air_pct\": 0, "
+                                 "\"min_outdoor_air_m3h\": 4500},");
+        recirculation = replaced(recirculation, "\"extract\": [", "\"extract\": [{\"id\": \"mix\", \"type\": \"coupled\"},");
+        recirculation = replaced(recirculation, "\"airflow_pct\": 100", "\"airflow_pct\": 150");
+        writeText(s_dir / "recirculation.awproj", recirculation);
+        // A silencer rated 2000 Pa at 0.5 m/s (32 kPa at 2 m/s, the drop scaling
+        // with the velocity squared) behind a fan of 5 % efficiency.
+        std::string fanHeat = replaced(demo, "\"rated_dp_Pa\": 40", "\"rated_dp_Pa\": 2000");
+        fanHeat = replaced(fanHeat, "\"rated_velocity_mps\": 2", "\"rated_velocity_mps\": 0.5");
+        fanHeat = replaced(fanHeat, "\"fan_efficiency_pct\": 70", "\"fan_efficiency_pct\": 5");
+        fanHeat = replaced(fanHeat, "\"motor_efficiency_pct\": 93", "\"motor_efficiency_pct\": 30");
+        writeText(s_dir / "fan-heat.awproj", fanHeat);
         writeText(s_dir / "big.awproj", std::string(16u * 1024u * 1024u + 1u, ' '));
         fs::create_directories(s_dir / "folder.awproj");
         writeText(s_dir / "bad-number.epw", epwWithField(epw, 100, 7, "abc"));
@@ -137,6 +154,24 @@ std::vector<BadInputRow> badInputRows()
         {"wrong_type", {"validate", "{dir}/type.awproj"}, InvalidInput, "site.altitude_m: must be a number, got a string"},
         {"out_of_range", {"validate", "{dir}/range.awproj"}, InvalidInput, "cases[0].outdoor.rh_pct: 120 is outside 0 .. 100"},
         {"unknown_key_warns", {"validate", "{dir}/unknown-key.awproj"}, Done, "warning: site.colour: unknown key, ignored"},
+        {"altitude_beyond_solver", {"validate", "{dir}/altitude.awproj"}, InvalidInput,
+         "site.altitude_m: 6000 is outside -500 .. 5500"},
+        // Problems that show only in a computed case: validate computes every case,
+        // compute refuses with the same line.
+        {"recirculation_in_one_case", {"validate", "{dir}/recirculation.awproj"}, InvalidInput,
+         "recirculation.awproj: extract[0]: in case 'winter design' the mixing section 'mix' recirculates "},
+        {"recirculation_in_one_case_compute", {"compute", "{dir}/recirculation.awproj"}, InvalidInput,
+         "error: extract[0]: in case 'winter design' the mixing section 'mix' recirculates "},
+        {"recirculation_other_case_computes", {"compute", "{dir}/recirculation.awproj", "--case", "summer design"},
+         Done, "Fernholt Public Library"},
+        {"fan_heats_beyond_200", {"validate", "{dir}/fan-heat.awproj"}, InvalidInput,
+         "fan-heat.awproj: supply[5]: in case 'winter design', fan 'supply-fan': the fan's heat "},
+        {"fan_heats_beyond_200_compute", {"compute", "{dir}/fan-heat.awproj"}, InvalidInput,
+         "error: supply[5]: in case 'winter design', fan 'supply-fan': the fan's heat "},
+        {"supply_only_unit_validates", {"validate", std::string(AIRWRIGHT_TEST_DATA_DIR) + "/projects/minimal-valid.awproj"},
+         Done, "minimal-valid.awproj: valid (2 sections, 1 case)"},
+        {"supply_only_unit_computes", {"compute", std::string(AIRWRIGHT_TEST_DATA_DIR) + "/projects/minimal-valid.awproj"},
+         Done, "(unnamed project)"},
         {"newer_version", {"validate", "{dir}/newer.awproj"}, InvalidInput, "the file is format version 2; this Airwright reads versions up to 1"},
         {"too_large", {"validate", "{dir}/big.awproj"}, InvalidInput, "project files are limited to 16 MiB (16777216 bytes)"},
         {"missing_file", {"validate", "{dir}/missing.awproj"}, InvalidInput, "missing.awproj: cannot open: "},

@@ -8,4 +8,5 @@ set(AIRWRIGHT_CLI_TEST_SOURCES
     cli/PointsCommandTest.cpp
     cli/CompareHrCommandTest.cpp
     cli/BadInputTest.cpp
+    cli/ValidateComputeAgreementTest.cpp
 )

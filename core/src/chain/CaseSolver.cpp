@@ -9,6 +9,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <utility>
 
 namespace Airwright::Core::Chain {
 
@@ -214,12 +215,60 @@ void CaseSolver::computeFlows()
         }
         if (!(m.value() > 1e-9)) {
             // No air would be left for the rest of the extract path: the flows of
-            // the project contradict each other, whatever the air states.
-            throw InputError("case '" + m_case.name + "', section '" + extract[k].id
-                             + "': more air leaves the extract path here (recirculated or crossing) than reaches it; "
-                               "lower the recirculated share or raise the extract airflow");
+            // the project contradict each other, whatever the air states. The
+            // message gives the flows and what would make them fit.
+            const double arriving = extractCubicMetresPerHour(m_extractInFlow[k]);
+            const std::string where = "in case '" + m_case.name + "' ";
+            const std::string supplyPlace = "supply[" + std::to_string(c.supplyIndex) + "]";
+            if (const auto* mix = specAs<Sections::MixingBox>(supply[c.supplyIndex])) {
+                const MassFlow total = c.recirculated + m_supplyInFlow[c.supplyIndex];
+                const double neededPct =
+                    std::ceil(100.0 * (1.0 - m_extractInFlow[k].value() / total.value()) + 1e-9);
+                throw SectionError(
+                    "extract[" + std::to_string(k) + "]",
+                    where + "the mixing section '" + extract[k].id + "' recirculates "
+                        + formatFixed(extractCubicMetresPerHour(c.recirculated), 0) + " m3/h but only "
+                        + formatFixed(arriving, 0)
+                        + " m3/h of extract air reaches it; the recirculated air must be less than the extract "
+                          "air reaching it: raise outdoor_air_pct of "
+                        + supplyPlace + " (now " + formatNumber(toPercent(mix->outdoorAirFraction)) + ") to at least "
+                        + formatNumber(std::min(neededPct, 100.0)) + ", or raise airflows.extract_m3h");
+            }
+            const auto* hr = specAs<Recovery::HeatRecovery>(supply[c.supplyIndex]);
+            const MassFlow supplyOut =
+                c.supplyIndex + 1 < supply.size() ? m_supplyInFlow[c.supplyIndex + 1] : m_supplyFlow;
+            const double lowestOacf = 1.0 - m_extractInFlow[k].value() / supplyOut.value();
+            throw SectionError("extract[" + std::to_string(k) + "]",
+                               where + "the wheel '" + extract[k].id + "' draws "
+                                   + formatFixed(arriving - extractCubicMetresPerHour(m), 0)
+                                   + " m3/h from the extract side to the supply side (oacf "
+                                   + formatNumber(hr ? hr->outdoorAirCorrection : 1.0) + ") but only "
+                                   + formatFixed(arriving, 0)
+                                   + " m3/h of extract air reaches it; the air drawn must be less than the extract "
+                                     "air reaching it: raise oacf of "
+                                   + supplyPlace + " above " + formatFixed(lowestOacf, 3)
+                                   + ", or raise airflows.extract_m3h");
         }
     }
+}
+
+std::string CaseSolver::placeOf(const Section& section) const
+{
+    for (std::size_t k = 0; k < m_unit.supply.size(); ++k)
+        if (&m_unit.supply[k] == &section)
+            return "supply[" + std::to_string(k) + "]";
+    for (std::size_t k = 0; k < m_unit.extract.size(); ++k)
+        if (&m_unit.extract[k] == &section)
+            return "extract[" + std::to_string(k) + "]";
+    return "section '" + section.id + "'";
+}
+
+double CaseSolver::extractCubicMetresPerHour(MassFlow m) const
+{
+    // The design extract flow is m_extractFlow of dry air at the room state.
+    if (!(m_extractFlow.value() > 0.0))
+        return 0.0;
+    return toCubicMetresPerHour(m_extractDesignFlow) * (m.value() / m_extractFlow.value());
 }
 
 Sections::SectionContext CaseSolver::contextFor(const Sections::AirStream& inlet, Pressure fanPressure) const
@@ -254,8 +303,17 @@ void CaseSolver::computeSection(const Section& section, Slot& slot, const Sectio
                 throw Error("internal: coupled section " + section.id + " computed as a plain one");
             } else {
                 typename T::Detail d;
-                outcome = spec.compute(air, ctx, d);
-                slot.detail = d;
+                try {
+                    outcome = spec.compute(air, ctx, d);
+                } catch (const SectionError&) {
+                    throw;
+                } catch (const InputError& e) {
+                    // Name the case and the section: the section's own message
+                    // does not know where it sits.
+                    throw SectionError(placeOf(section), "in case '" + m_case.name + "', " + sectionTypeKey(section.spec)
+                                                             + " '" + section.id + "': " + e.what());
+                }
+                slot.detail = std::move(d);
             }
         },
         section.spec);
@@ -470,7 +528,7 @@ void CaseSolver::supplyPass(std::size_t from)
                 slot.pressureDrop = outcome.pressureDrop;
                 slot.waterRemoved = outcome.waterRemoved;
                 slot.faceVelocity = ctx.faceVelocity;
-                slot.detail = detail;
+                slot.detail = std::move(detail);
                 slot.findings = std::move(outcome.findings);
                 for (auto& f : slot.findings)
                     if (f.sectionId.empty())

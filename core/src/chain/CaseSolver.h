@@ -17,6 +17,7 @@
 // pass's for those after (in the first pass those are computed ahead once, with
 // the air at the fan's inlet).
 
+#include "airwright/core/InputError.h"
 #include "airwright/core/chain/AirHandlingUnit.h"
 #include "airwright/core/chain/CaseResult.h"
 #include "airwright/core/recovery/HeatRecoveryEvaluation.h"
@@ -28,6 +29,25 @@ namespace Airwright::Core::Chain {
 
 class CaseSolver {
 public:
+    // An input error met at one section while solving a case (the flows of the
+    // case contradict each other there, or the section cannot compute its air):
+    // where, as the section's place in the unit ("supply[3]", "extract[1]", the
+    // same as in the project file), and why, the case named in the message.
+    // ChainSolver::check reports it at that place.
+    class SectionError : public InputError {
+    public:
+        SectionError(std::string place, const std::string& message)
+            : InputError(place + ": " + message), m_place(std::move(place)), m_message(message)
+        {
+        }
+        const std::string& place() const noexcept { return m_place; }
+        const std::string& message() const noexcept { return m_message; }
+
+    private:
+        std::string m_place;
+        std::string m_message;
+    };
+
     CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase, const UnitSizing& sizing);
     // Couplings point into their own evaluator memories: never copied or moved.
     CaseSolver(const CaseSolver&) = delete;
@@ -87,6 +107,10 @@ private:
                         const Sections::SectionContext& ctx, Pressure pIn);
     void finish(CaseResult& result, int iterations, bool converged, const std::string& unsettled);
     Coupling& coupling(const std::string& id);
+    // "supply[k]" or "extract[k]" for a section of the unit.
+    std::string placeOf(const Section& section) const;
+    // Dry-air mass flow of extract air as m3/h on the file's flow basis, for messages.
+    double extractCubicMetresPerHour(MassFlow m) const;
     Sections::SectionContext contextFor(const Sections::AirStream& inlet, Pressure fanPressure) const;
     // What a control at supply index k aims at: the setpoint less the drift after
     // it, kept inside the psychrometric range (a drift that pushes it out cannot be

@@ -48,10 +48,14 @@ void ChainSolver::validate(const AirHandlingUnit& unit)
     if (!(p.value() >= 50000.0 && p.value() <= 110000.0))
         throw InputError("site pressure", p.value(), "Pa", "50000 .. 110000 Pa (about -500 .. 5500 m)");
     const auto& flows = unit.airflows;
-    if (!(flows.supply.value() > 0.0 && flows.supply.value() < 200.0))
+    if (!(flows.supply.value() > 0.0 && flows.supply.value() <= 200.0))
         throw InputError("supply airflow", toCubicMetresPerHour(flows.supply), "m3/h", "above 0 .. 720000 m3/h");
-    if (!(flows.extract.value() > 0.0 && flows.extract.value() < 200.0))
-        throw InputError("extract airflow", toCubicMetresPerHour(flows.extract), "m3/h", "above 0 .. 720000 m3/h");
+    // Zero extract is a supply-only unit: no extract path, so nothing to compute there.
+    if (unit.extract.empty() ? !(flows.extract.value() >= 0.0 && flows.extract.value() <= 200.0)
+                             : !(flows.extract.value() > 0.0 && flows.extract.value() <= 200.0))
+        throw InputError("extract airflow", toCubicMetresPerHour(flows.extract), "m3/h",
+                         unit.extract.empty() ? "0 .. 720000 m3/h"
+                                              : "above 0 .. 720000 m3/h (0 only for a unit without an extract path)");
     for (auto [what, value] : {std::pair{"supply external pressure before the unit", flows.supplyExternalBefore},
                                std::pair{"supply external pressure after the unit", flows.supplyExternalAfter},
                                std::pair{"extract external pressure before the unit", flows.extractExternalBefore},
@@ -108,6 +112,29 @@ void ChainSolver::validate(const AirHandlingUnit& unit)
         if (!caseNames.insert(c.name).second)
             throw InputError("case name '" + c.name + "' is used twice");
     }
+}
+
+std::vector<ChainSolver::Problem> ChainSolver::check(const AirHandlingUnit& unit)
+{
+    try {
+        validate(unit);
+    } catch (const InputError& e) {
+        return {{"", e.what()}};
+    }
+    // Each case as solve() computes it: the flows of a case and the air a section
+    // makes are known only then. Cases are independent, so every one is tried.
+    std::vector<Problem> problems;
+    const UnitSizing sizing = size(unit);
+    for (std::size_t i = 0; i < unit.cases.size(); ++i) {
+        try {
+            solveCase(unit, unit.cases[i], sizing);
+        } catch (const CaseSolver::SectionError& e) {
+            problems.push_back({e.place(), e.message()});
+        } catch (const InputError& e) {
+            problems.push_back({"cases[" + std::to_string(i) + "]", "case '" + unit.cases[i].name + "': " + e.what()});
+        }
+    }
+    return problems;
 }
 
 UnitSizing ChainSolver::size(const AirHandlingUnit& unit)

@@ -53,10 +53,11 @@ void readSite(JsonObjectReader& root, Chain::Site& site)
     JsonObjectReader r(*value, "site", root.log());
     site.altitude.reset();
     site.barometricPressure.reset();
-    // Sites from below sea level to high mountain towns; the pressure limits span
-    // the standard atmosphere over that range with room for weather.
-    readOptionalQuantity(r, "altitude_m", site.altitude, U::kMetre, Limits{-500.0, 6000.0});
-    readOptionalQuantity(r, "pressure_Pa", site.barometricPressure, U::kPascal, Limits{45000.0, 110000.0});
+    // Sites from below sea level to high mountain towns. The solver works from
+    // 50000 to 110000 Pa (ChainSolver::validate); 5500 m is the highest altitude
+    // whose standard-atmosphere pressure (50506 Pa) stays inside that.
+    readOptionalQuantity(r, "altitude_m", site.altitude, U::kMetre, Limits{-500.0, 5500.0});
+    readOptionalQuantity(r, "pressure_Pa", site.barometricPressure, U::kPascal, Limits{50000.0, 110000.0});
     if (!r.has("altitude_m") && !r.has("pressure_Pa"))
         r.log().error("site", "give altitude_m or pressure_Pa");
     r.reportUnknownKeys();
@@ -76,10 +77,12 @@ void readAirflows(JsonObjectReader& root, Chain::Airflows& airflows)
         else
             r.error("basis", "unknown flow basis '" + *basis + "' (allowed: standard_air, actual)");
     }
-    const Limits flow{0.0, 1.0e6, true};
+    // Up to 200 m3/s, the solver's limit (ChainSolver::validate).
+    const Limits flow{0.0, 720000.0, true};
     readQuantity(r, "supply_m3h", airflows.supply, U::kCubicMetresPerHour, flow, Presence::Required);
     // Zero extract is a supply-only unit; checked against the extract path later.
-    readQuantity(r, "extract_m3h", airflows.extract, U::kCubicMetresPerHour, Limits{0.0, 1.0e6}, Presence::Required);
+    readQuantity(r, "extract_m3h", airflows.extract, U::kCubicMetresPerHour, Limits{0.0, 720000.0},
+                 Presence::Required);
     const Limits external{0.0, 3000.0};
     readQuantity(r, "supply_external_before_Pa", airflows.supplyExternalBefore, U::kPascal, external);
     readQuantity(r, "supply_external_after_Pa", airflows.supplyExternalAfter, U::kPascal, external);
@@ -94,10 +97,12 @@ void readCasing(JsonObjectReader& root, Chain::Casing& casing)
     if (!value)
         return;
     JsonObjectReader r(*value, "casing", root.log());
-    readQuantity(r, "max_face_velocity_mps", casing.targetFaceVelocity, U::kMetresPerSecond, Limits{0.0, 10.0, true});
-    readOptionalQuantity(r, "width_mm", casing.width, U::kMillimetre, Limits{0.0, 10000.0, true});
-    readOptionalQuantity(r, "height_mm", casing.height, U::kMillimetre, Limits{0.0, 10000.0, true});
-    readQuantity(r, "sizing_grid_mm", casing.sizingGrid, U::kMillimetre, Limits{0.0, 1000.0, true});
+    // The solver's ranges (ChainSolver::validate), so that a file that reads
+    // cleanly is also one the solver takes.
+    readQuantity(r, "max_face_velocity_mps", casing.targetFaceVelocity, U::kMetresPerSecond, Limits{0.5, 6.0});
+    readOptionalQuantity(r, "width_mm", casing.width, U::kMillimetre, Limits{200.0, 10000.0});
+    readOptionalQuantity(r, "height_mm", casing.height, U::kMillimetre, Limits{200.0, 10000.0});
+    readQuantity(r, "sizing_grid_mm", casing.sizingGrid, U::kMillimetre, Limits{10.0, 500.0});
     r.reportUnknownKeys();
 }
 

@@ -122,10 +122,11 @@ void readSpec(JsonObjectReader& r, Filter& f)
 
 void readSpec(JsonObjectReader& r, WaterHeatingCoil& c)
 {
-    const bool flowOk = readQuantity(r, "flow_temperature_C", c.flowTemperature, U::kCelsius, Limits{0.0, 150.0, true},
+    // Up to 100 C: the fluid property tables end there (WaterHeatingCoil::validate).
+    const bool flowOk = readQuantity(r, "flow_temperature_C", c.flowTemperature, U::kCelsius, Limits{0.0, 100.0, true},
                                      Presence::Required);
     const bool returnOk = readQuantity(r, "return_temperature_C", c.returnTemperature, U::kCelsius,
-                                       Limits{0.0, 150.0, true}, Presence::Required);
+                                       Limits{0.0, 100.0, true}, Presence::Required);
     if (flowOk && returnOk && !(c.returnTemperature < c.flowTemperature))
         r.error("return_temperature_C",
                 "must be below flow_temperature_C (" + fileText(c.flowTemperature, U::kCelsius) + ")");
@@ -134,7 +135,7 @@ void readSpec(JsonObjectReader& r, WaterHeatingCoil& c)
     readQuantity(r, "dp_per_row_Pa", c.pressureDropPerRow, U::kPascal, Limits{0.0, 200.0});
     readOptionalQuantity(r, "capacity_kW", c.capacity, U::kKilowatt, Limits{0.0, 100000.0, true});
     const bool outletOk = readOptionalQuantity(r, "fixed_outlet_tdb_C", c.fixedOutletTemperature, U::kCelsius,
-                                               Limits{-40.0, 150.0, true, true});
+                                               Limits{-40.0, 100.0, true, true});
     if (outletOk && flowOk && c.fixedOutletTemperature && !(*c.fixedOutletTemperature < c.flowTemperature))
         r.error("fixed_outlet_tdb_C",
                 "must be below flow_temperature_C (" + fileText(c.flowTemperature, U::kCelsius) + ")");

@@ -6,6 +6,7 @@
 #include "airwright/core/psychro/AirProcesses.h"
 
 #include <cmath>
+#include <optional>
 
 namespace Airwright::Core::Sections {
 
@@ -54,9 +55,21 @@ SectionOutcome Fan::compute(const AirStream& inlet, const SectionContext& contex
     // Heat to the air: all the electric input with the motor in the airstream, else
     // the shaft power (the impeller's losses end up in the air either way).
     const Power heat = motorInAirstream ? detail.electricPower : detail.shaftPower;
-    const auto process = Psychro::heatByDuty(inlet.state, heat, inlet.dryAir);
-    detail.temperatureRise = process.outlet.dryBulb() - inlet.state.dryBulb();
-    return SectionOutcome{{process.outlet, inlet.dryAir}, -pt, MassFlow{}, MassFlow{}, {}};
+    std::optional<Psychro::ProcessOutcome> process;
+    try {
+        process = Psychro::heatByDuty(inlet.state, heat, inlet.dryAir);
+    } catch (const InputError&) {
+        if (!(inlet.dryAir.value() > 0.0) || !std::isfinite(heat.value()))
+            throw;
+        // The psychrometric range ends at 200 C; say why the fan gets there.
+        throw InputError("the fan's heat " + formatFixed(toKilowatts(heat), 1) + " kW (total pressure "
+                         + formatFixed(pt.value(), 0) + " Pa at " + formatFixed(toPercent(detail.overallEfficiency), 1)
+                         + " % overall efficiency" + (motorInAirstream ? ", motor in the airstream" : "")
+                         + ") would warm the air beyond 200 C, the most the air may reach: lower the pressure drops "
+                           "of the path or raise the fan's efficiencies");
+    }
+    detail.temperatureRise = process->outlet.dryBulb() - inlet.state.dryBulb();
+    return SectionOutcome{{process->outlet, inlet.dryAir}, -pt, MassFlow{}, MassFlow{}, {}};
 }
 
 } // namespace Airwright::Core::Sections

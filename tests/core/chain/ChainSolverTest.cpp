@@ -195,6 +195,59 @@ TEST(ChainSolver, FiguresCarryTheContractKeys)
         EXPECT_TRUE(std::any_of(figures.begin(), figures.end(), [&](const Figure& f) { return f.key == key; })) << key;
 }
 
+// A supply-only unit (no extract path, zero extract flow) is a unit of its own:
+// it solves, and check() finds nothing.
+TEST(ChainSolver, SupplyOnlyUnitWithZeroExtractSolves)
+{
+    auto unit = exampleUnit();
+    std::erase_if(unit.supply, [](const Section& s) { return s.id == "HR"; });
+    unit.extract.clear();
+    unit.airflows.extract = cubicMetresPerHour(0.0);
+    EXPECT_TRUE(ChainSolver::check(unit).empty());
+    const auto result = ChainSolver::solve(unit);
+    ASSERT_EQ(result.cases.size(), 2u);
+    for (const auto& c : result.cases) {
+        EXPECT_TRUE(c.extract.empty());
+        EXPECT_EQ(c.totals.extractFlow.value(), 0.0);
+        EXPECT_GT(c.totals.supplyFlow.value(), 0.0);
+        EXPECT_FALSE(hasFinding(c, "fan.missing"));
+    }
+}
+
+// A mixing section whose minimum outdoor air is a smaller share at the winter
+// case's 150 % airflow: only that case recirculates more than the extract path
+// brings. check() names the place, the case and what would fit; solve() refuses
+// with the same text.
+TEST(ChainSolver, CheckFindsRecirculationBeyondTheExtractAirInOneCase)
+{
+    auto unit = exampleUnit(); // 8000 m3/h both paths
+    Sections::MixingBox mix;
+    mix.outdoorAirFraction = percent(0.0);
+    mix.minimumOutdoorFlow = cubicMetresPerHour(4000.0);
+    unit.supply.insert(unit.supply.begin(), Section{"MIX", mix});
+    unit.extract.insert(unit.extract.begin() + 1, Section{"MIX", CoupledSide{}});
+    unit.airflows.extract = cubicMetresPerHour(4500.0);
+    unit.cases[0].airflowFraction = percent(150.0); // 12000 m3/h: 8000 recirculated, 6750 extract
+    const auto problems = ChainSolver::check(unit);
+    ASSERT_EQ(problems.size(), 1u);
+    EXPECT_EQ(problems[0].path, "extract[1]");
+    const std::string& message = problems[0].message;
+    EXPECT_EQ(message.rfind("in case 'winter' the mixing section 'MIX' recirculates ", 0), 0u) << message;
+    // 8000 of 12000 m3/h recirculated against 6750 arriving: at least 1 - 6750/12000
+    // = 43.75 % outdoor air, as a whole percent 44 (standard air, so up to the
+    // small difference of humidity ratio between outdoor and room air).
+    EXPECT_NE(message.find("raise outdoor_air_pct of supply[0] (now 0) to at least 4"), std::string::npos) << message;
+    try {
+        ChainSolver::solve(unit);
+        FAIL() << "expected InputError";
+    } catch (const InputError& e) {
+        EXPECT_EQ(std::string(e.what()), problems[0].path + ": " + problems[0].message);
+    }
+    unit.cases.erase(unit.cases.begin()); // the summer case alone fits
+    EXPECT_TRUE(ChainSolver::check(unit).empty());
+    EXPECT_NO_THROW(ChainSolver::solve(unit));
+}
+
 struct InvalidUnitRow {
     const char* name;
     void (*breakIt)(AirHandlingUnit&);
@@ -243,5 +296,25 @@ INSTANTIATE_TEST_SUITE_P(
                            std::get<Sections::WaterHeatingCoil>(u.supply[3].spec).returnTemperature = celsius(70.0);
                        },
                        "return temperature"},
-        InvalidUnitRow{"empty_id", [](AirHandlingUnit& u) { u.supply[0].id.clear(); }, "needs an id"}),
+        InvalidUnitRow{"empty_id", [](AirHandlingUnit& u) { u.supply[0].id.clear(); }, "needs an id"},
+        InvalidUnitRow{"zero_extract_with_extract_path",
+                       [](AirHandlingUnit& u) { u.airflows.extract = cubicMetresPerHour(0.0); },
+                       "extract airflow 0 m3/h is outside the allowed range above 0 .. 720000 m3/h (0 only for a "
+                       "unit without an extract path)"},
+        InvalidUnitRow{"wheel_draws_more_than_extract",
+                       [](AirHandlingUnit& u) {
+                           auto& hr = std::get<Recovery::HeatRecovery>(u.supply[2].spec);
+                           hr.kind = Recovery::ExchangerKind::RotaryNonHygroscopic;
+                           hr.outdoorAirCorrection = 0.8;
+                           u.airflows.extract = cubicMetresPerHour(1000.0); // 8000 x 0.2 = 1600 drawn across
+                       },
+                       "extract[1]: in case 'winter' the wheel 'HR' draws "},
+        InvalidUnitRow{"fan_heats_beyond_200",
+                       [](AirHandlingUnit& u) {
+                           auto& fan = std::get<Sections::Fan>(u.supply[5].spec);
+                           fan.fanEfficiency = percent(5.0);
+                           fan.motorEfficiency = percent(30.0);
+                           u.airflows.supplyExternalAfter = pascals(5000.0);
+                       },
+                       "supply[5]: in case 'winter', fan 'SF': the fan's heat "}),
     invalidRowName);

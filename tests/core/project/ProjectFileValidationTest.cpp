@@ -92,7 +92,47 @@ std::vector<Row> rows()
          {"airflows.supply_m3h: must be positive"}},
         {"supply_flow_huge",
          edit([](Json& j) { j["airflows"]["supply_m3h"] = 2.5e6; }),
-         {"airflows.supply_m3h: 2500000 is outside the allowed range above 0 .. 1000000"}},
+         {"airflows.supply_m3h: 2500000 is outside the allowed range above 0 .. 720000"}},
+        // The unit-level ranges are the solver's (ChainSolver::validate), so that a
+        // file that loads is one the solver takes; the limits themselves load.
+        {"solver_limits_load",
+         edit([](Json& j) {
+             j["site"]["altitude_m"] = 5500;
+             j["airflows"]["supply_m3h"] = 720000;
+             j["airflows"]["extract_m3h"] = 720000;
+             j["casing"]["max_face_velocity_mps"] = 6;
+             j["casing"]["width_mm"] = 200;
+             j["casing"]["sizing_grid_mm"] = 10;
+             j["supply"][3]["flow_temperature_C"] = 100;
+         }),
+         {}},
+        {"extract_flow_above_solver",
+         edit([](Json& j) { j["airflows"]["extract_m3h"] = 800000; }),
+         {"airflows.extract_m3h: 800000 is outside 0 .. 720000"}},
+        {"altitude_above_solver",
+         edit([](Json& j) { j["site"]["altitude_m"] = 6000; }),
+         {"site.altitude_m: 6000 is outside -500 .. 5500"}},
+        {"pressure_below_solver",
+         edit([](Json& j) { j["site"] = Json{{"pressure_Pa", 45000}}; }),
+         {"site.pressure_Pa: 45000 is outside 50000 .. 110000"}},
+        {"face_velocity_outside_solver",
+         edit([](Json& j) { j["casing"]["max_face_velocity_mps"] = 8; }),
+         {"casing.max_face_velocity_mps: 8 is outside 0.5 .. 6"}},
+        {"face_velocity_below_solver",
+         edit([](Json& j) { j["casing"]["max_face_velocity_mps"] = 0.2; }),
+         {"casing.max_face_velocity_mps: 0.2 is outside 0.5 .. 6"}},
+        {"casing_narrower_than_solver",
+         edit([](Json& j) {
+             j["casing"]["width_mm"] = 150;
+             j["casing"]["height_mm"] = 150;
+         }),
+         {"casing.width_mm: 150 is outside 200 .. 10000", "casing.height_mm: 150 is outside 200 .. 10000"}},
+        {"sizing_grid_outside_solver",
+         edit([](Json& j) { j["casing"]["sizing_grid_mm"] = 600; }),
+         {"casing.sizing_grid_mm: 600 is outside 10 .. 500"}},
+        {"heating_flow_above_fluid_tables",
+         edit([](Json& j) { j["supply"][3]["flow_temperature_C"] = 120; }),
+         {"supply[3].flow_temperature_C: 120 is outside the allowed range above 0 .. 100"}},
         {"extract_zero_with_sections",
          edit([](Json& j) { j["airflows"]["extract_m3h"] = 0; }),
          {"airflows.extract_m3h: must be positive when the extract path has sections"}},

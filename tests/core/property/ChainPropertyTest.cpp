@@ -62,8 +62,9 @@ private:
 // in eight: wheels with crossing flows whose two sides miss the energy balance by
 // up to about 1 % of the duty (the enthalpy of water condensed in or re-evaporated
 // from the matrix is not tracked), two mixing boxes, and projects that solve
-// refuses although the file checks accept them (more air recirculated than the
-// extract path brings in one case; fans heating the air beyond 200 C).
+// refuses (more air recirculated than the extract path brings in one case; fans
+// heating the air beyond 200 C): the file loads, and ChainSolver::check (what
+// airwright-cli validate runs) refuses them with the same message.
 TEST(ChainProperty, DISABLED_RandomProjectsSolveFiniteAndBalancedStrict)
 {
     Property::RandomProjectGenerator generator(demoProject(), kSeed);

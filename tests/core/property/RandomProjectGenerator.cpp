@@ -65,8 +65,8 @@ void RandomProjectGenerator::randomiseSite(AirHandlingUnit& unit)
     flows.supplyExternalAfter = pascals(uniform(0.0, 3000.0) * (chance(0.8) ? 0.2 : 1.0));
     flows.extractExternalBefore = pascals(uniform(0.0, 3000.0) * (chance(0.8) ? 0.2 : 1.0));
     flows.extractExternalAfter = pascals(uniform(0.0, 3000.0) * (chance(0.8) ? 0.1 : 1.0));
-    // The solver accepts 0.5 .. 6 m/s and a 10 .. 500 mm grid (ChainSolver::validate),
-    // inside the file's wider ranges.
+    // The solver and the file checks accept 0.5 .. 6 m/s and a 10 .. 500 mm grid
+    // (ChainSolver::validate, ProjectReader).
     unit.casing.targetFaceVelocity = metresPerSecond(uniform(0.5, 6.0));
     unit.casing.sizingGrid = millimetres(uniform(10.0, 500.0));
     unit.casing.width.reset();
