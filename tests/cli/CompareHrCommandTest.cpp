@@ -8,6 +8,7 @@
 
 #include <cmath>
 #include <filesystem>
+#include <fstream>
 #include <sstream>
 
 using Airwright::Cli::CompareHrCommand;
@@ -103,6 +104,39 @@ TEST(CompareHrCommand, OptionsReachTheComparison)
         // Definition: CO2 saved = heat saved x 0.25 + electricity saved x 0.1 (kg -> t).
         const double co2 = (o["heat_saving_MWh"].get<double>() * 0.25 + o["electricity_saving_MWh"].get<double>() * 0.1);
         EXPECT_NEAR(o["co2_saving_t"].get<double>(), co2, 1e-9 + 1e-9 * std::abs(co2)) << o["name"];
+    }
+}
+
+// A unit with a mixing (recirculation) section is compared like any other
+// (issue 5: the annual model used to refuse it). The demo with 40 % outdoor air
+// mixed in after its exchanger and the recirculated air taken before it.
+TEST(CompareHrCommand, ComparesAUnitWithAMixingSection)
+{
+    std::ifstream in(kProject);
+    json project = json::parse(in);
+    auto& supply = project["supply"];
+    auto& extract = project["extract"];
+    supply.insert(supply.begin() + 3, json{{"id", "mix"}, {"type", "mixing"}, {"outdoor_air_pct", 40}});
+    extract.insert(extract.begin() + 1, json{{"id", "mix"}, {"type", "coupled"}});
+    const auto file = std::filesystem::temp_directory_path() / "airwright-compare-hr-mixing.awproj";
+    std::ofstream(file) << project.dump(2);
+
+    const auto r = run({file.string(), "--climate", kBins, "--format", "json", "--no-sensitivity"});
+    std::filesystem::remove(file);
+    ASSERT_EQ(r.code, Airwright::Cli::Done) << r.err;
+    const auto j = json::parse(r.out);
+    expectFiniteNumbers(j, "$");
+    ASSERT_EQ(j["options"].size(), 6u);
+    // Common practice: with heat recovery the unit needs less heat than without.
+    double none = 0.0;
+    for (const auto& o : j["options"])
+        if (o["key"] == "none")
+            none = o["heating_MWh"].get<double>();
+    EXPECT_GT(none, 0.0);
+    for (const auto& o : j["options"]) {
+        if (o["key"] != "none") {
+            EXPECT_LT(o["heating_MWh"].get<double>(), none) << o["key"];
+        }
     }
 }
 

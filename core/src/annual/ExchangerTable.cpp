@@ -23,7 +23,9 @@ Values lerp(const Values& a, const Values& b, double u)
             mix(a.frostProtectionW, b.frostProtectionW),
             mix(a.preheatW, b.preheatW),
             mix(a.frostRisk, b.frostRisk),
-            mix(a.pumpW, b.pumpW)};
+            mix(a.pumpW, b.pumpW),
+            mix(a.extractC, b.extractC),
+            mix(a.extractW, b.extractW)};
 }
 
 } // namespace

@@ -27,6 +27,26 @@ std::vector<Chain::Section>::iterator afterLeading(std::vector<Chain::Section>& 
     return std::find_if_not(path.begin(), path.end(), isLeading);
 }
 
+// Where an added exchanger goes in the extract path: after the leading dampers and
+// filters, and after the take-off of any mixing section, so that the exchanger
+// sees the air that leaves the building and the recirculated air is room air
+// (the usual arrangement, common practice).
+std::vector<Chain::Section>::iterator extractPlace(const Chain::AirHandlingUnit& unit,
+                                                   std::vector<Chain::Section>& extract)
+{
+    auto place = afterLeading(extract);
+    for (auto it = extract.begin(); it != extract.end(); ++it) {
+        if (!std::holds_alternative<Chain::CoupledSide>(it->spec))
+            continue;
+        const bool mixing = std::any_of(unit.supply.begin(), unit.supply.end(), [&](const Chain::Section& s) {
+            return s.id == it->id && std::holds_alternative<Sections::MixingBox>(s.spec);
+        });
+        if (mixing && it >= place)
+            place = it + 1;
+    }
+    return place;
+}
+
 bool isRecoveryFinding(const Finding& f)
 {
     return f.code.rfind("recovery.", 0) == 0 || f.code.rfind("frost.", 0) == 0;
@@ -153,14 +173,15 @@ Chain::AirHandlingUnit HeatRecoveryComparison::unitWith(const Chain::AirHandling
     if (supplyIt != out.supply.end()) {
         supplyIt->spec = spec;
         if (std::none_of(out.extract.begin(), out.extract.end(), marker))
-            out.extract.insert(afterLeading(out.extract), Chain::Section{id, Chain::CoupledSide{}});
+            out.extract.insert(extractPlace(out, out.extract), Chain::Section{id, Chain::CoupledSide{}});
     } else {
         if (std::any_of(out.supply.begin(), out.supply.end(), [&](const Chain::Section& s) { return s.id == id; })
             || std::any_of(out.extract.begin(), out.extract.end(), [&](const Chain::Section& s) { return s.id == id; }))
             throw InputError("the unit already has a section called '" + id
                              + "'; rename it so that the compared heat recovery can be added");
+        // In the supply path before any mixing section (it is not a leading one).
         out.supply.insert(afterLeading(out.supply), Chain::Section{id, spec});
-        out.extract.insert(afterLeading(out.extract), Chain::Section{id, Chain::CoupledSide{}});
+        out.extract.insert(extractPlace(out, out.extract), Chain::Section{id, Chain::CoupledSide{}});
     }
     return out;
 }

@@ -2,6 +2,7 @@
 
 #include "ExchangerTable.h"
 #include "airwright/core/InputError.h"
+#include "airwright/core/NumberFormat.h"
 #include "airwright/core/chain/ChainSolver.h"
 #include "airwright/core/psychro/AirProcesses.h"
 #include "airwright/core/psychro/PsychroRaw.h"
@@ -23,6 +24,9 @@ constexpr double kCoilApproachK = 1.0;
 // As the chain: a cooling coil leaving this far below its target is dehumidifying.
 constexpr double kDehumidifyingMarginK = 0.05;
 constexpr int kMaxDriftPasses = 3;
+// With mixing the return air may come from the exchanger's extract outlet, which
+// depends on the exchanger's control (a loop the passes settle geometrically).
+constexpr int kMaxMixingPasses = 40;
 constexpr double kDriftSettledK = 1e-4;
 constexpr std::size_t kStackSections = 64;
 
@@ -56,13 +60,9 @@ UnitHourModel::UnitHourModel(const Chain::AirHandlingUnit& unit, const Chain::Un
     m_standardAir = unit.airflows.basis == Chain::FlowBasis::StandardAir;
 
     int recoveries = 0;
-    for (const auto& s : unit.supply) {
-        if (specAs<Sections::MixingBox>(s))
-            throw InputError("section " + s.id
-                             + ": the annual simulation does not model mixing (recirculation) sections yet");
+    for (const auto& s : unit.supply)
         if (specAs<Recovery::HeatRecovery>(s))
             ++recoveries;
-    }
     if (recoveries > 1)
         throw InputError("the annual simulation models at most one heat recovery section; the unit has "
                          + std::to_string(recoveries));
@@ -112,29 +112,57 @@ UnitHourModel::UnitHourModel(const Chain::AirHandlingUnit& unit, const Chain::Un
             m_recovery.emplace(*hr, unit.airflows.supply * airflowFraction.value());
             m_recoveryControlled = hr->bypassControl;
             recoveryId = s.id;
+        } else if (const auto* mix = specAs<Sections::MixingBox>(s)) {
+            // The chain's share: at the supply volume flow of the mode.
+            step.kind = StepKind::Mixing;
+            step.outdoorShare = mix->outdoorShare(unit.airflows.supply * airflowFraction.value()).value();
+            m_mixing = true;
         }
         if (step.kind == StepKind::FixedHeater || step.kind == StepKind::Humidifier
-            || step.kind == StepKind::UncontrolledRecovery)
+            || step.kind == StepKind::UncontrolledRecovery || step.kind == StepKind::Mixing)
             m_driftPasses = true;
         m_supply.push_back(std::move(step));
     }
-    if (recoveryId) {
-        for (std::size_t k = 0; k < unit.extract.size() && unit.extract[k].id != *recoveryId; ++k) {
-            const auto& s = unit.extract[k];
-            Step step;
-            step.section = k;
-            if (specAs<Sections::Fan>(s)) {
-                step.kind = StepKind::Fan;
-                step.riseByAnchor = fanRises(Chain::PathKind::Extract, k);
-            } else if (const auto* c = specAs<Sections::WaterHeatingCoil>(s); c && c->fixedOutletTemperature) {
-                step.kind = StepKind::FixedHeater;
-                step.fixedC = toCelsius(*c->fixedOutletTemperature);
-            } else if (const auto* e = specAs<Sections::ElectricHeater>(s); e && e->fixedOutletTemperature) {
-                step.kind = StepKind::FixedHeater;
-                step.fixedC = toCelsius(*e->fixedOutletTemperature);
+
+    // The extract path as far as it matters: up to the exchanger (its inlet air)
+    // and up to the last take-off of a mixing section (the return air).
+    std::size_t needed = 0;
+    for (std::size_t k = 0; k < unit.extract.size(); ++k) {
+        const auto& s = unit.extract[k];
+        if (!std::holds_alternative<Chain::CoupledSide>(s.spec))
+            continue;
+        if (recoveryId && s.id == *recoveryId)
+            needed = k + 1;
+        for (const auto& x : unit.supply)
+            if (x.id == s.id && specAs<Sections::MixingBox>(x))
+                needed = k + 1;
+    }
+    for (std::size_t k = 0; k < needed; ++k) {
+        const auto& s = unit.extract[k];
+        Step step;
+        step.section = k;
+        if (specAs<Sections::Fan>(s)) {
+            step.kind = StepKind::Fan;
+            step.riseByAnchor = fanRises(Chain::PathKind::Extract, k);
+        } else if (const auto* c = specAs<Sections::WaterHeatingCoil>(s); c && c->fixedOutletTemperature) {
+            step.kind = StepKind::FixedHeater;
+            step.fixedC = toCelsius(*c->fixedOutletTemperature);
+        } else if (const auto* e = specAs<Sections::ElectricHeater>(s); e && e->fixedOutletTemperature) {
+            step.kind = StepKind::FixedHeater;
+            step.fixedC = toCelsius(*e->fixedOutletTemperature);
+        } else if (std::holds_alternative<Chain::CoupledSide>(s.spec)) {
+            if (recoveryId && s.id == *recoveryId) {
+                step.kind = StepKind::Recovery;
+            } else {
+                for (std::size_t j = 0; j < unit.supply.size(); ++j) {
+                    if (unit.supply[j].id == s.id) {
+                        step.kind = StepKind::TakeOff;
+                        step.partner = j;
+                    }
+                }
             }
-            m_extractBeforeRecovery.push_back(std::move(step));
         }
+        m_extract.push_back(std::move(step));
     }
 }
 
@@ -165,8 +193,14 @@ bool UnitHourModel::tabulate(AbsoluteTemperature lowest, AbsoluteTemperature hig
     const double last = std::ceil(hi / dt) * dt;
     // A jump of recovered heat larger than the sensible heat of 1.5 grid steps at
     // the design flow is a switching threshold, not a slope (ExchangerTable::at).
+    // With mixing, the outdoor air is that share of the flow: the exchanger's
+    // slope scales with it, and so does the jump that marks a threshold (our own).
+    double outdoorShare = 1.0;
+    for (const Step& s : m_supply)
+        if (s.kind == StepKind::Mixing)
+            outdoorShare *= s.outdoorShare;
     const double designDryAir = m_supplyFlow * kStandardAirDensity;
-    const double jump = 1.5 * designDryAir * 1006.0 * dt;
+    const double jump = 1.5 * designDryAir * outdoorShare * 1006.0 * dt;
     auto table = std::make_shared<ExchangerTable>(
         first, last, dt, m_pressure, jump, [this](double t, double w) { return walk(t, w, nullptr).recovery; },
         control);
@@ -214,6 +248,8 @@ UnitHourModel::RecoveryValues UnitHourModel::evaluateRecovery(double inletC, dou
     v.preheatW = toWatts(out.preheat);
     v.frostRisk = out.detail.frost.risk ? 1.0 : 0.0;
     v.pumpW = toWatts(out.detail.pumpPower);
+    v.extractC = toCelsius(out.extractOut.state.dryBulb());
+    v.extractW = toKilogramsPerKilogram(out.extractOut.state.humidityRatio());
     return v;
 }
 
@@ -241,54 +277,129 @@ UnitHourModel::Walk UnitHourModel::walk(double outdoorC, double outdoorW, const 
                                             : m_supplyFlow / raw::specificVolume(outdoorC, outdoorW, p);
     const double extractFlow = m_standardAir ? m_extractFlow * kStandardAirDensity / (1.0 + roomW)
                                              : m_extractFlow / raw::specificVolume(roomC, roomW, p);
-    const double recoveryInletFlow =
-        m_recovery ? toKilogramsPerSecond(m_recovery->supplyInletFlow(kilogramsPerSecond(supplyFlow))) : supplyFlow;
 
     Walk out;
     HourResult& r = out.result;
     r.mode = m_mode;
     r.fanPower = watts(byAnchor(m_fanPowerByAnchor));
 
-    // Extract air up to the exchanger.
-    double extractC = roomC;
-    double extractHeating = 0.0;
-    for (const auto& step : m_extractBeforeRecovery) {
-        if (step.kind == StepKind::Fan) {
-            extractC += byAnchor(step.riseByAnchor);
-        } else if (step.kind == StepKind::FixedHeater && extractC < step.fixedC) {
-            extractHeating += extractFlow * (raw::enthalpy(step.fixedC, roomW) - raw::enthalpy(extractC, roomW));
-            extractC = step.fixedC;
+    // Per supply section: the temperature change of the sections the controls do
+    // not set, the drift (setpoint less the aim of a controlled section), the
+    // dry-air inlet flow; per mixing section: the recirculated dry air, the return
+    // air and the humidity ratio reaching it; per extract section: the inlet flow.
+    // Left uninitialised on purpose: every entry is written before it is read.
+    const std::size_t n = m_supply.size();
+    const std::size_t ne = m_extract.size();
+    constexpr std::size_t kRows = 7;
+    std::array<double, (kRows + 1) * kStackSections> stack;
+    std::vector<double> heap;
+    double* buffer = stack.data();
+    if (kRows * n + ne > stack.size()) {
+        heap.assign(kRows * n + ne, 0.0);
+        buffer = heap.data();
+    }
+    double* change = buffer;
+    double* drift = buffer + n;
+    double* inFlow = buffer + 2 * n;
+    double* recirculated = buffer + 3 * n;
+    double* returnC = buffer + 4 * n;
+    double* returnW = buffer + 5 * n;
+    double* mixerW = buffer + 6 * n;
+    double* extractInFlow = buffer + 7 * n;
+
+    // Supply flows from the outlet back to the intake (the chain's computeFlows).
+    double flow = supplyFlow;
+    std::size_t recoveryStep = n;
+    for (std::size_t k = n; k-- > 0;) {
+        const Step& step = m_supply[k];
+        if (step.kind == StepKind::Mixing) {
+            const double outdoor = flow * step.outdoorShare;
+            recirculated[k] = flow - outdoor;
+            // Until the take-off is reached in a pass: the room (the chain's first pass).
+            returnC[k] = roomC;
+            returnW[k] = roomW;
+            mixerW[k] = outdoorW;
+            flow = outdoor;
+        } else if (step.kind == StepKind::Recovery || step.kind == StepKind::UncontrolledRecovery) {
+            flow = toKilogramsPerSecond(m_recovery->supplyInletFlow(kilogramsPerSecond(flow)));
+            recoveryStep = k;
         }
+        inFlow[k] = flow;
+    }
+    // Extract flows from the room forward: less the recirculated air at a
+    // take-off, plus the air a wheel carries across (OACF above 1).
+    flow = extractFlow;
+    for (std::size_t j = 0; j < ne; ++j) {
+        extractInFlow[j] = flow;
+        const Step& step = m_extract[j];
+        if (step.kind == StepKind::TakeOff)
+            flow -= recirculated[step.partner];
+        else if (step.kind == StepKind::Recovery)
+            flow += inFlow[recoveryStep] - (recoveryStep + 1 < n ? inFlow[recoveryStep + 1] : supplyFlow);
+        if ((step.kind == StepKind::TakeOff || step.kind == StepKind::Recovery) && !(flow > 1e-9))
+            throw InputError("at outdoor " + formatFixed(outdoorC, 1) + " C, section '"
+                             + m_unit.extract[step.section].id
+                             + "': more air leaves the extract path here (recirculated or crossing) than reaches it; "
+                               "lower the recirculated share or raise the extract airflow");
     }
 
-    // Temperature change of every section the controls do not set; controlled
-    // sections aim at the setpoint less the change after them (the chain's rule).
-    const std::size_t n = m_supply.size();
-    // Left uninitialised on purpose: only the first n entries are used, and they
-    // are all written before they are read.
-    std::array<double, kStackSections> changeStack;
-    std::array<double, kStackSections> driftStack;
-    std::vector<double> changeHeap;
-    std::vector<double> driftHeap;
-    double* change = changeStack.data();
-    double* drift = driftStack.data();
-    if (n > kStackSections) {
-        changeHeap.assign(n, 0.0);
-        driftHeap.assign(n, 0.0);
-        change = changeHeap.data();
-        drift = driftHeap.data();
-    }
+    // Extract air from index `from` on, up to the exchanger (returns its index) or
+    // the end: fans add their rise, fixed heaters heat, take-offs give the return air.
+    const auto walkExtract = [&](std::size_t from, double& c, double& x, double& heating) {
+        for (std::size_t j = from; j < ne; ++j) {
+            const Step& step = m_extract[j];
+            switch (step.kind) {
+            case StepKind::Fan:
+                c += byAnchor(step.riseByAnchor);
+                break;
+            case StepKind::FixedHeater:
+                if (c < step.fixedC) {
+                    heating += extractInFlow[j] * (raw::enthalpy(step.fixedC, x) - raw::enthalpy(c, x));
+                    c = step.fixedC;
+                }
+                break;
+            case StepKind::TakeOff:
+                returnC[step.partner] = c;
+                returnW[step.partner] = x;
+                break;
+            case StepKind::Recovery:
+                return j;
+            default:
+                break;
+            }
+        }
+        return ne;
+    };
+    double extractC = roomC;
+    double extractW = roomW;
+    double extractHeating = 0.0;
+    const std::size_t extractRecovery = walkExtract(0, extractC, extractW, extractHeating);
+    const double recoveryExtractFlow = extractRecovery < ne ? extractInFlow[extractRecovery] : extractFlow;
+
+    // Controlled sections aim at the setpoint less the change of the uncontrolled
+    // sections after them (the chain's rule).
     for (std::size_t k = 0; k < n; ++k)
         change[k] = m_supply[k].kind == StepKind::Fan ? byAnchor(m_supply[k].riseByAnchor) : 0.0;
 
-    const int passes = m_driftPasses ? kMaxDriftPasses : 1;
+    const int passes = m_mixing ? kMaxMixingPasses : m_driftPasses ? kMaxDriftPasses : 1;
     for (int pass = 0; pass < passes; ++pass) {
-        double after = 0.0;
+        // The outlet each section should reach, from the setpoint back. Across a
+        // mixing section the inlet that mixes to it: the chain gets there by
+        // repeating its passes with the mixer's temperature change.
+        double aimed = setpointC;
         for (std::size_t k = n; k-- > 0;) {
-            drift[k] = after;
+            drift[k] = setpointC - std::clamp(aimed, Psychro::kMinTemperatureC + 1.0, Psychro::kMaxTemperatureC - 1.0);
             const StepKind kind = m_supply[k].kind;
-            if (kind != StepKind::Heater && kind != StepKind::CoolingCoil && kind != StepKind::Recovery)
-                after += change[k];
+            if (kind == StepKind::Heater || kind == StepKind::CoolingCoil || kind == StepKind::Recovery)
+                continue;
+            if (kind == StepKind::Mixing && recirculated[k] > 0.0 && inFlow[k] > 1e-9) {
+                const double f = inFlow[k] / (inFlow[k] + recirculated[k]);
+                const double wMixed = f * mixerW[k] + (1.0 - f) * returnW[k];
+                const double hIn = (raw::enthalpy(aimed, wMixed) - (1.0 - f) * raw::enthalpy(returnC[k], returnW[k])) / f;
+                aimed = raw::dryBulbFromEnthalpy(hIn, mixerW[k]);
+            } else {
+                aimed -= change[k];
+            }
         }
 
         double t = outdoorC;
@@ -298,13 +409,12 @@ UnitHourModel::Walk UnitHourModel::walk(double outdoorC, double outdoorW, const 
         double water = 0.0;
         double steamPower = 0.0;
         bool dehumidifying = false;
-        bool passedRecovery = !m_recovery;
         double largestChange = 0.0;
 
         for (std::size_t k = 0; k < n; ++k) {
             const Step& step = m_supply[k];
             const auto& section = m_unit.supply[step.section];
-            const double m = passedRecovery ? supplyFlow : recoveryInletFlow;
+            const double m = inFlow[k];
             const double before = t;
             const auto heatTo = [&](double target, std::optional<double> capacity) {
                 if (t >= target)
@@ -424,8 +534,8 @@ UnitHourModel::Walk UnitHourModel::walk(double outdoorC, double outdoorW, const 
                 const std::optional<double> target =
                     step.kind == StepKind::Recovery ? std::optional(setpointC - drift[k]) : std::nullopt;
                 const RecoveryValues v = tabulated ? *tabulated
-                                                   : evaluateRecovery(t, w, recoveryInletFlow, extractC, roomW,
-                                                                      extractFlow, target);
+                                                   : evaluateRecovery(t, w, m, extractC, extractW,
+                                                                      recoveryExtractFlow, target);
                 out.recovery = v;
                 t = v.supplyC;
                 w = v.supplyW;
@@ -435,12 +545,38 @@ UnitHourModel::Walk UnitHourModel::walk(double outdoorC, double outdoorW, const 
                 r.frost = v.frostRisk >= 0.5;
                 r.pumpPower = watts(v.pumpW);
                 r.supplyAfterRecovery = celsius(t);
-                passedRecovery = true;
+                // The extract air after the exchanger, for take-offs after it.
+                if (extractRecovery < ne) {
+                    double c = v.extractC;
+                    double x = v.extractW;
+                    walkExtract(extractRecovery + 1, c, x, heating);
+                }
                 break;
             }
+            case StepKind::Mixing: {
+                // By dry-air mass (Psychro::mix); nothing recirculated: the outdoor air passes.
+                mixerW[k] = w;
+                const double back = recirculated[k];
+                if (back <= 0.0)
+                    break;
+                const double f = m / (m + back);
+                const double wMixed = f * w + (1.0 - f) * returnW[k];
+                const double h = f * raw::enthalpy(t, w) + (1.0 - f) * raw::enthalpy(returnC[k], returnW[k]);
+                t = std::clamp(raw::dryBulbFromEnthalpy(h, wMixed), Psychro::kMinTemperatureC,
+                               Psychro::kMaxTemperatureC);
+                w = wMixed;
+                if (w > raw::satHumidityRatio(t, p) * (1.0 + raw::kSaturationTolerance)) {
+                    const auto clamped = Psychro::clampToSaturation(celsius(t), kilogramsPerKilogram(w), pascals(p));
+                    t = toCelsius(clamped.outlet.dryBulb());
+                    w = toKilogramsPerKilogram(clamped.outlet.humidityRatio());
+                }
+                break;
+            }
+            case StepKind::TakeOff:
+                break;
             }
             if (step.kind == StepKind::FixedHeater || step.kind == StepKind::Humidifier
-                || step.kind == StepKind::UncontrolledRecovery) {
+                || step.kind == StepKind::UncontrolledRecovery || step.kind == StepKind::Mixing) {
                 largestChange = std::max(largestChange, std::abs((t - before) - change[k]));
                 change[k] = t - before;
             }

@@ -176,11 +176,7 @@ TEST(AnnualHourModel, RejectsWhatItCannotModel)
     const auto sizing = Chain::ChainSolver::size(base);
     const SeasonalConditions conditions(base.cases, base.site.pressure());
 
-    // A mixing section (recirculation).
-    auto mixing = base;
-    mixing.supply.insert(mixing.supply.begin(), Chain::Section{"mix", Sections::MixingBox{}});
-    mixing.extract.push_back(Chain::Section{"mix", Chain::CoupledSide{}});
-    EXPECT_THROW(UnitHourModel(mixing, sizing, conditions, percent(100.0), OperatingMode::Normal), InputError);
+    // Mixing (recirculation) sections are modelled: UnitHourModelMixingTest.cpp.
 
     // Two heat recovery sections.
     auto twice = base;

@@ -9,6 +9,7 @@ list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
     core/annual/OperatingScheduleTest.cpp
     core/annual/SeasonalConditionsTest.cpp
     core/annual/UnitHourModelTest.cpp
+    core/annual/UnitHourModelMixingTest.cpp
     core/annual/AnnualSimulationTest.cpp
     core/annual/OptionRankingTest.cpp
     core/annual/HeatRecoveryComparisonTest.cpp

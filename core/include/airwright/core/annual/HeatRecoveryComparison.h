@@ -32,7 +32,9 @@ public:
 
     // The unit with this option: the existing heat recovery section's
     // description replaced (id and place kept), or a new section "heat-recovery"
-    // placed after the leading dampers and filters of both paths, or the section
+    // placed after the leading dampers and filters of both paths (in the extract
+    // path also after the take-off of a mixing section, so that the exchanger
+    // handles outdoor and exhaust air), or the section
     // removed for the option without heat recovery. A rated flow left empty
     // becomes the unit's supply design flow.
     static Chain::AirHandlingUnit unitWith(const Chain::AirHandlingUnit& unit, const HeatRecoveryOption& option);

@@ -19,17 +19,33 @@
 //     after it, frost assessment and protection) at the hour's inlet states and
 //     dry-air flows. As in the chain, a heating coil after a dehumidifying
 //     cooling coil reheats only when a case asks for reheat.
+//     Mixing (recirculation) sections work as in the chain, in every hour (the
+//     chain has no economiser control): the outdoor share is MixingBox::outdoorShare at the
+//     mode's supply flow, the dry-air flows follow from the supply outlet back to
+//     the intake, the return air is the extract air at the take-off (room state
+//     plus the extract fans' rise and fixed heaters before it, or the exchanger's
+//     extract outlet when the take-off follows the exchanger), mixed by dry-air
+//     mass (fog settles as in Psychro::mix), and the extract air after the
+//     take-off, so an exchanger after it, carries that much less dry air. A
+//     controlled section before a mixing section aims at the mixer's inlet
+//     temperature that gives the setpoint less the rise after it: the point the
+//     chain's passes converge to, reached here in 2 passes when the return air is
+//     taken before the exchanger; return air taken after it depends on the
+//     exchanger's control and the exchanger on it, which takes more passes (at
+//     most 40; 10 to 17 on the demo unit).
 //  3. Tabulated evaluation: the exchanger's outcome depends on the hour only
 //     through the outdoor state (room state and setpoints are functions of the
-//     outdoor temperature), so it can be evaluated once on a grid of outdoor dry
-//     bulb (tabulate's step) and humidity (0.2, 0.6 and 1.0 of saturation at each
-//     grid temperature) and interpolated (linear in humidity ratio, then in dry
-//     bulb). Hours outside the tabulated range are evaluated exactly.
+//     outdoor temperature; so is mixed air before the exchanger, and the return
+//     air the exchanger's own extract outlet feeds back is its converged value),
+//     so it can be evaluated once on a grid of outdoor dry bulb (tabulate's step)
+//     and humidity (0.2, 0.6 and 1.0 of saturation at each grid temperature) and
+//     interpolated (linear in humidity ratio, then in dry bulb). Hours outside
+//     the tabulated range are evaluated exactly.
 //
-// Not modelled: mixing (recirculation) sections (InputError), more than one heat
-// recovery section (InputError), changes of fan power within an hour or with the
-// bypass position, the steps of a stepped electric heater (its energy is taken
-// as what the setpoint needs).
+// Not modelled: more than one heat recovery section (InputError), changes of fan
+// power within an hour or with the bypass position, the steps of a stepped
+// electric heater (its energy is taken as what the setpoint needs). Extract
+// sections are walked only as far as the exchanger and the take-offs need.
 
 #include "airwright/core/Quantities.h"
 #include "airwright/core/annual/HourResult.h"
@@ -95,16 +111,31 @@ public:
         double preheatW = 0.0;
         double frostRisk = 0.0; // 0 or 1; interpolated values count from 0.5
         double pumpW = 0.0;
+        double extractC = 0.0; // extract air leaving the exchanger (return air of a take-off after it)
+        double extractW = 0.0;
     };
 
 private:
-    enum class StepKind { Passive, Fan, Heater, FixedHeater, CoolingCoil, Humidifier, Recovery, UncontrolledRecovery };
+    enum class StepKind {
+        Passive,
+        Fan,
+        Heater,
+        FixedHeater,
+        CoolingCoil,
+        Humidifier,
+        Recovery,
+        UncontrolledRecovery,
+        Mixing, // supply side of a mixing section
+        TakeOff // extract side of a mixing section
+    };
     struct Step {
         StepKind kind = StepKind::Passive;
         std::size_t section = 0;
         std::vector<double> riseByAnchor; // fans, K
         std::optional<double> capacityW;  // heaters
         double fixedC = 0.0;              // fixed-outlet heaters
+        double outdoorShare = 1.0;        // mixing: outdoor share of the supply's dry air
+        std::size_t partner = 0;          // take-off: its mixing step in the supply path
     };
     struct Walk {
         HourResult result;
@@ -124,8 +155,11 @@ private:
     double m_extractFlow = 0.0;
     bool m_standardAir = true;
     std::vector<Step> m_supply;
-    std::vector<Step> m_extractBeforeRecovery;
+    // Extract path as far as the exchanger and the last take-off need (the
+    // exchanger's extract side is a Recovery step).
+    std::vector<Step> m_extract;
     bool m_driftPasses = false; // uncontrolled sections other than fans change the temperature
+    bool m_mixing = false;
     std::vector<double> m_fanPowerByAnchor;
     std::vector<Chain::CaseResult> m_anchorResults;
     std::optional<Recovery::HeatRecoveryEvaluator> m_recovery;
