@@ -82,7 +82,7 @@ void describeDesign(const UnitHourModel& model, OptionResult& out)
     auto spec = std::get<Recovery::HeatRecovery>(it->spec);
     spec.bypassControl = false;
     spec.frostStrategy = Recovery::FrostStrategy::None;
-    const Recovery::HeatRecoveryEvaluator device(spec, unit.airflows.supply * model.airflowFraction().value());
+    const Recovery::HeatRecoveryEvaluator device(spec, unit.airflows.supply); // rated as the chain rates it
     Recovery::HeatRecoveryInputs in;
     in.supplyIn = supply->inlet;
     in.extractIn = extract->inlet;

@@ -109,7 +109,9 @@ UnitHourModel::UnitHourModel(const Chain::AirHandlingUnit& unit, const Chain::Un
             step.kind = StepKind::Humidifier;
         } else if (const auto* hr = specAs<Recovery::HeatRecovery>(s)) {
             step.kind = hr->bypassControl ? StepKind::Recovery : StepKind::UncontrolledRecovery;
-            m_recovery.emplace(*hr, unit.airflows.supply * airflowFraction.value());
+            // Rated at the unit's design flow, as the chain rates it: at part
+            // airflow the same device works at part flow.
+            m_recovery.emplace(*hr, unit.airflows.supply);
             m_recoveryControlled = hr->bypassControl;
             recoveryId = s.id;
         } else if (const auto* mix = specAs<Sections::MixingBox>(s)) {

@@ -17,6 +17,10 @@ namespace {
 
 constexpr double kStandardAirDensity = 1.2; // kg/m3, moist air (EN 13053, common practice)
 constexpr double kConvergence = 1e-4;       // K; W and p scaled to match, see largestChange
+// Largest observed contraction per iteration for which run() estimates the
+// distance left to the fixed point from it (the passes usually contract a
+// hundredfold per iteration; a slower one must settle by its changes alone).
+constexpr double kTrustedContraction = 0.05;
 // A fan is computed again in the same pass when the drops it serves moved by more
 // than this since (1 % of what the convergence test sees, Pa).
 constexpr double kFanPressureTolerance = 2e-2;
@@ -122,7 +126,22 @@ SectionResult makeResult(const Section& section, PathKind path, const Sections::
 
 } // namespace
 
+CaseSolver::Evaluators CaseSolver::makeEvaluators(const AirHandlingUnit& unit)
+{
+    Evaluators evaluators(unit.supply.size());
+    for (std::size_t i = 0; i < unit.supply.size(); ++i)
+        if (const auto* hr = specAs<Recovery::HeatRecovery>(unit.supply[i]))
+            evaluators[i] = std::make_shared<const Recovery::HeatRecoveryEvaluator>(*hr, unit.airflows.supply);
+    return evaluators;
+}
+
 CaseSolver::CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase, const UnitSizing& sizing)
+    : CaseSolver(unit, designCase, sizing, makeEvaluators(unit))
+{
+}
+
+CaseSolver::CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase, const UnitSizing& sizing,
+                       const Evaluators& evaluators)
     : m_unit(unit), m_case(designCase), m_sizing(sizing), m_pressure(unit.site.pressure())
 {
     m_outdoor = Psychro::MoistAirState::fromDryBulbRelativeHumidity(designCase.outdoorTemperature,
@@ -158,8 +177,10 @@ CaseSolver::CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase
         Coupling& c = m_couplings.emplace_back();
         c.id = unit.supply[i].id;
         c.supplyIndex = i;
-        if (const auto* hr = specAs<Recovery::HeatRecovery>(unit.supply[i]))
-            c.evaluator.emplace(*hr, m_supplyDesignFlow);
+        if (specAs<Recovery::HeatRecovery>(unit.supply[i]))
+            c.evaluator = i < evaluators.size() ? evaluators[i] : nullptr;
+        if (specAs<Recovery::HeatRecovery>(unit.supply[i]) && !c.evaluator)
+            throw Error("internal: no heat recovery model for section " + unit.supply[i].id);
         for (std::size_t j = 0; j < unit.extract.size(); ++j)
             if (unit.extract[j].id == c.id)
                 c.extractIndex = j;
@@ -592,6 +613,7 @@ CaseResult CaseSolver::run()
     const Pressure extractExternal = flows.extractExternalBefore + flows.extractExternalAfter;
     int iteration = 0;
     bool converged = false;
+    double lastChange = 0.0;
     std::string unsettled;
     extractPass(true, 0);
     std::vector<double> before(3 * (m_supply.size() + m_extract.size()));
@@ -609,10 +631,18 @@ CaseResult CaseSolver::run()
             extractPass(false, firstFan(m_unit.extract));
         const std::string* where = nullptr;
         const double change = largestChange(before, where);
-        if (iteration >= 2 && change < kConvergence) {
+        // Settled when the distance left to the fixed point is below kConvergence.
+        // For an iteration contracting by rho per step that distance is at most
+        // change * rho / (1 - rho) (the a-posteriori bound of the contraction
+        // mapping theorem); rho is estimated from the last two changes and trusted
+        // only when it is clearly small, otherwise the change itself must be.
+        const double rho = lastChange > 0.0 ? change / lastChange : 1.0;
+        const double left = rho <= kTrustedContraction ? change * rho / (1.0 - rho) : change;
+        if (iteration >= 2 && (change < kConvergence || left < kConvergence)) {
             converged = true;
             break;
         }
+        lastChange = change;
         unsettled = where ? *where : std::string();
     }
     finish(result, iteration, converged, unsettled);

@@ -22,6 +22,7 @@
 #include "airwright/core/chain/CaseResult.h"
 #include "airwright/core/recovery/HeatRecoveryEvaluation.h"
 
+#include <memory>
 #include <optional>
 #include <vector>
 
@@ -48,7 +49,16 @@ public:
         std::string m_message;
     };
 
+    // The heat recovery model of each supply section (null for other sections),
+    // rated at the unit's design supply flow where the section gives no rated
+    // flow: the same device in every case, so that a case at part airflow sees
+    // the exchanger at part flow. Built once and shared by the cases of a solve.
+    using Evaluators = std::vector<std::shared_ptr<const Recovery::HeatRecoveryEvaluator>>;
+    static Evaluators makeEvaluators(const AirHandlingUnit& unit);
+
     CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase, const UnitSizing& sizing);
+    CaseSolver(const AirHandlingUnit& unit, const DesignCase& designCase, const UnitSizing& sizing,
+               const Evaluators& evaluators);
     // Couplings point into their own evaluator memories: never copied or moved.
     CaseSolver(const CaseSolver&) = delete;
     CaseSolver& operator=(const CaseSolver&) = delete;
@@ -61,7 +71,7 @@ private:
         std::size_t supplyIndex = 0;
         std::size_t extractIndex = 0;
         std::optional<Sections::AirStream> extractInlet;
-        std::optional<Recovery::HeatRecoveryEvaluator> evaluator;
+        std::shared_ptr<const Recovery::HeatRecoveryEvaluator> evaluator;
         Recovery::HeatRecoveryEvaluator::Memory memory;
         const Recovery::HeatRecoveryOutcome* recovery = nullptr; // in memory, from the last supply pass
         MassFlow recirculated;

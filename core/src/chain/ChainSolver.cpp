@@ -220,8 +220,11 @@ UnitResult ChainSolver::solve(const AirHandlingUnit& unit)
     UnitResult result;
     result.sizing = size(unit);
     result.cases.reserve(unit.cases.size());
-    for (const auto& c : unit.cases)
-        result.cases.push_back(solveCase(unit, c, result.sizing));
+    const CaseSolver::Evaluators evaluators = CaseSolver::makeEvaluators(unit);
+    for (const auto& c : unit.cases) {
+        CaseSolver solver(unit, c, result.sizing, evaluators);
+        result.cases.push_back(solver.run());
+    }
     return result;
 }
 

@@ -54,6 +54,32 @@ TEST(ChainSolver, WinterReachesSetpointWithRecoveryThenHeating)
     EXPECT_GT(toCelsius(*detail.frost.onsetOutdoorTemperature), -10.0);
 }
 
+TEST(ChainSolver, PartAirflowCaseSeesTheExchangerAtPartFlow)
+{
+    // The exchanger is one device rated at the unit's design flow: in a case at
+    // half the airflow its NTU = UA / C rises (UA ~ m^0.6, C ~ m; Incropera,
+    // Fundamentals of Heat and Mass Transfer, 6th ed., sec. 11.4), so its
+    // effectiveness rises. Frost protection is left out (no strategy) so that
+    // only the exchanger itself is compared.
+    auto unit = exampleUnit();
+    std::get<Recovery::HeatRecovery>(unit.supply[2].spec).frostStrategy = Recovery::FrostStrategy::None;
+    unit.cases.resize(1);
+    unit.cases.push_back(unit.cases.front());
+    unit.cases.back().name = "half airflow";
+    unit.cases.back().airflowFraction = fraction(0.5);
+    const auto result = ChainSolver::solve(unit);
+    const auto effectiveness = [&](std::size_t i) {
+        return std::get<Recovery::HeatRecoveryDetail>(section(result.cases.at(i), PathKind::Supply, "HR").detail)
+            .temperatureEffectiveness.value();
+    };
+    EXPECT_GT(effectiveness(1), effectiveness(0) + 0.02);
+    // The same device: the regulation figure at rated flow does not move with the case.
+    EXPECT_EQ(std::get<Recovery::HeatRecoveryDetail>(section(result.cases.at(1), PathKind::Supply, "HR").detail)
+                  .regulationThermalEfficiency.value(),
+              std::get<Recovery::HeatRecoveryDetail>(section(result.cases.at(0), PathKind::Supply, "HR").detail)
+                  .regulationThermalEfficiency.value());
+}
+
 TEST(ChainSolver, UnprotectedFrostIsAnErrorFindingAndRecoveryRunsFull)
 {
     auto unit = exampleUnit();
