@@ -830,17 +830,18 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
     const bool hasCooling = std::any_of(m_unit.supply.begin(), m_unit.supply.end(), [](const Section& s) {
         return specAs<Sections::CoolingCoil>(s) != nullptr;
     });
-    const std::string leaves = "supply air leaves at " + formatFixed(toCelsius(leaving.dryBulb()), 1) + " C";
-    const std::string setpoint = " the setpoint " + formatFixed(toCelsius(m_case.supplySetpoint), 1) + " C";
+    // Built only for a finding: most cases meet their setpoint.
+    const auto leaves = [&] { return "supply air leaves at " + formatFixed(toCelsius(leaving.dryBulb()), 1) + " C"; };
+    const auto setpoint = [&] { return " the setpoint " + formatFixed(toCelsius(m_case.supplySetpoint), 1) + " C"; };
     if (error < -0.5) {
         std::string why = hasHeating ? "" : ": the supply path has no heating";
         if (hasHeating && m_maxHumidity && !m_case.dehumidifyWithReheat)
             why = ": dehumidification without reheat";
         findings.push_back({hasHeating ? Severity::Warning : Severity::Error, "setpoint.too_cold", "",
-                            leaves + ", " + formatFixed(-error, 1) + " K below" + setpoint + why});
+                            leaves() + ", " + formatFixed(-error, 1) + " K below" + setpoint() + why});
     } else if (error > 0.5) {
         findings.push_back({Severity::Warning, "setpoint.too_warm", "",
-                            leaves + ", " + formatFixed(error, 1) + " K above" + setpoint
+                            leaves() + ", " + formatFixed(error, 1) + " K above" + setpoint()
                                 + (hasCooling ? "" : ": the supply path has no cooling")});
     }
     const double tolerance = 2e-5;

@@ -6,7 +6,9 @@
 
 #include <algorithm>
 #include <cmath>
-#include <set>
+#include <string>
+#include <string_view>
+#include <vector>
 
 namespace Airwright::Core::Chain {
 
@@ -27,15 +29,23 @@ void validateSpec(const Section& section)
     }
 }
 
-void validatePath(const std::vector<Section>& path, const char* name, std::set<std::string>& ids)
+// Ids seen so far; a linear search, as paths are short (at most a few dozen) and
+// every solve validates, so no allocation per id.
+using IdList = std::vector<std::string_view>;
+
+bool contains(const IdList& ids, std::string_view id) { return std::find(ids.begin(), ids.end(), id) != ids.end(); }
+
+void validatePath(const std::vector<Section>& path, const char* name, IdList& ids)
 {
+    ids.reserve(ids.size() + path.size());
     for (std::size_t i = 0; i < path.size(); ++i) {
         const auto& section = path[i];
-        const std::string where = std::string(name) + "[" + std::to_string(i) + "]";
+        const auto where = [&] { return std::string(name) + "[" + std::to_string(i) + "]"; };
         if (section.id.empty())
-            throw InputError(where + ": a section needs an id");
-        if (!ids.insert(section.id).second)
-            throw InputError(where + ": id '" + section.id + "' is used twice");
+            throw InputError(where() + ": a section needs an id");
+        if (contains(ids, section.id))
+            throw InputError(where() + ": id '" + section.id + "' is used twice");
+        ids.push_back(section.id);
         validateSpec(section);
     }
 }
@@ -71,9 +81,9 @@ void ChainSolver::validate(const AirHandlingUnit& unit)
     if (!(casing.sizingGrid.value() >= 0.01 && casing.sizingGrid.value() <= 0.5))
         throw InputError("sizing grid", toMillimetres(casing.sizingGrid), "mm", "10 .. 500 mm");
 
-    std::set<std::string> ids;
+    IdList ids;
     validatePath(unit.supply, "supply", ids);
-    std::set<std::string> extractIds;
+    IdList extractIds;
     validatePath(unit.extract, "extract", extractIds);
 
     for (const auto& section : unit.supply) {
@@ -100,17 +110,18 @@ void ChainSolver::validate(const AirHandlingUnit& unit)
                 throw InputError("extract section " + section.id
                                  + " is marked coupled but the supply path has no heat recovery or mixing section "
                                    "with that id");
-        } else if (ids.count(section.id)) {
+        } else if (contains(ids, section.id)) {
             throw InputError("extract section " + section.id + ": id is also used in the supply path");
         }
     }
     if (unit.cases.empty())
         throw InputError("the unit needs at least one design case");
-    std::set<std::string> caseNames;
+    IdList caseNames;
     for (const auto& c : unit.cases) {
         c.validate();
-        if (!caseNames.insert(c.name).second)
+        if (contains(caseNames, c.name))
             throw InputError("case name '" + c.name + "' is used twice");
+        caseNames.push_back(c.name);
     }
 }
 

@@ -226,14 +226,52 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
                 (bySpeed ? trial.rotorSpeedRatio : trial.bypassFraction) = fraction(x);
                 return m_exchanger.controlFigures(trial).frostMargin;
             };
-            const double safeMargin = margin(safe);
-            if (safeMargin < 0.0) {
+            // Warm start (the chain's next pass): secant steps from the last root,
+            // each aimed a little past so that the root is soon bracketed.
+            const auto fromLastRoot = [&](double last) -> std::optional<double> {
+                const double lower = std::min(frosting, safe), upper = std::max(frosting, safe);
+                double xa = frosting, fa = performance.frostMargin; // frosting: fa < 0
+                double xb = std::clamp(last, lower, upper);
+                if (xb == xa)
+                    return std::nullopt;
+                double fb = margin(xb);
+                for (int step = 0; step < 4; ++step) {
+                    if (fb == 0.0)
+                        return xb;
+                    if (fb == fa)
+                        return std::nullopt;
+                    const double secant = std::clamp(xb - fb * (xb - xa) / (fb - fa), lower, upper);
+                    const double past = std::max(1e-3 * std::abs(secant - xb), 2.0 * kAcceptStep);
+                    const double x1 = std::clamp(secant + (secant > xb ? past : -past), lower, upper);
+                    if (x1 == xb)
+                        return std::nullopt;
+                    const double f1 = margin(x1);
+                    if ((f1 >= 0.0) != (fb >= 0.0))
+                        return findBracketedRoot(margin, xb, x1, fb, f1, kControlTolerance, 40, kAcceptStep).x;
+                    xa = xb;
+                    fa = fb;
+                    xb = x1;
+                    fb = f1;
+                }
+                return std::nullopt;
+            };
+            std::optional<double> root;
+            if (memory && memory->m_frostRoot)
+                root = fromLastRoot(*memory->m_frostRoot);
+            if (!root) {
+                const double safeMargin = margin(safe);
+                if (safeMargin >= 0.0)
+                    root = findBracketedRoot(margin, frosting, safe, performance.frostMargin, safeMargin,
+                                             kControlTolerance, 40, kAcceptStep)
+                               .x;
+            }
+            if (!root) {
                 control = fraction(bySpeed ? 0.0 : 1.0); // nothing short of stopping recovery helps
             } else {
-                const auto root = findBracketedRoot(margin, frosting, safe, performance.frostMargin, safeMargin,
-                                                    kControlTolerance, 40, kAcceptStep);
+                if (memory)
+                    memory->m_frostRoot = *root;
                 // Step to the frost-free side of the root.
-                const double x = bySpeed ? root.x - kControlTolerance : root.x + kControlTolerance;
+                const double x = bySpeed ? *root - kControlTolerance : *root + kControlTolerance;
                 control = fraction(std::clamp(x, 0.0, 1.0));
             }
             performance = evaluateAt(point);

@@ -71,6 +71,7 @@ public:
         std::optional<Ratio> m_control; // bypass or rotor speed the control found
         std::optional<AbsoluteTemperature> m_fullOutlet; // supply outlet at full recovery, for m_inputs' streams
         std::optional<TemperatureDifference> m_outletChangePerControl; // slope the last control solve found
+        std::optional<double> m_frostRoot; // bypass share or rotor speed where the last frost margin was zero
     public:
         // Outcomes computed (not taken from memory), for tests and benchmarks.
         int evaluations = 0;
