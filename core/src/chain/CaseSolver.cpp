@@ -8,6 +8,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <iterator>
 #include <limits>
 #include <utility>
 
@@ -622,12 +623,14 @@ CaseResult CaseSolver::run()
         snapshot(before);
         updateDrift();
         // A fan whose drops after it moved since it was computed is computed again
-        // (with the sections after it) in the same pass.
+        // (with the sections after it) in the same pass. Not in the first
+        // iteration: a second always follows it, with the drops of the first.
+        const int sweeps = iteration == 1 ? 1 : kFanSweeps;
         supplyPass(0);
-        for (int sweep = 1; sweep < kFanSweeps && !fansSettled(m_unit.supply, m_supply, supplyExternal); ++sweep)
+        for (int sweep = 1; sweep < sweeps && !fansSettled(m_unit.supply, m_supply, supplyExternal); ++sweep)
             supplyPass(firstFan(m_unit.supply));
         extractPass(false, 0);
-        for (int sweep = 1; sweep < kFanSweeps && !fansSettled(m_unit.extract, m_extract, extractExternal); ++sweep)
+        for (int sweep = 1; sweep < sweeps && !fansSettled(m_unit.extract, m_extract, extractExternal); ++sweep)
             extractPass(false, firstFan(m_unit.extract));
         const std::string* where = nullptr;
         const double change = largestChange(before, where);
@@ -690,8 +693,9 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
     findings = m_caseFindings;
 
     result.supply.reserve(m_supply.size());
+    // The slots are not used after this: their details and findings move out.
     for (std::size_t k = 0; k < m_supply.size(); ++k) {
-        const Slot& s = m_supply[k];
+        Slot& s = m_supply[k];
         const Section& section = m_unit.supply[k];
         if (m_supplyCoupling[k] != kNone && m_couplings[m_supplyCoupling[k]].recovery) {
             const auto& out = *m_couplings[m_supplyCoupling[k]].recovery;
@@ -705,13 +709,14 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
         } else {
             result.supply.push_back(makeResult(section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
                                                s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved,
-                                               s.detail));
-            findings.insert(findings.end(), s.findings.begin(), s.findings.end());
+                                               std::move(s.detail)));
+            findings.insert(findings.end(), std::make_move_iterator(s.findings.begin()),
+                            std::make_move_iterator(s.findings.end()));
         }
     }
     result.extract.reserve(m_extract.size());
     for (std::size_t k = 0; k < m_extract.size(); ++k) {
-        const Slot& s = m_extract[k];
+        Slot& s = m_extract[k];
         const Section& section = m_unit.extract[k];
         if (m_extractCoupling[k] != kNone) {
             const Coupling& c = m_couplings[m_extractCoupling[k]];
@@ -720,14 +725,14 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
             result.extract.push_back(makeResult(supplySection, PathKind::Extract, s.inlet, s.outlet,
                                                 s.staticPressureIn, s.pressureDrop, s.faceVelocity, MassFlow{},
                                                 s.waterRemoved, c.recovery ? SectionDetail{c.recovery->detail}
-                                                                           : s.detail));
+                                                                           : std::move(s.detail)));
         } else {
             result.extract.push_back(makeResult(section, PathKind::Extract, s.inlet, s.outlet, s.staticPressureIn,
                                                 s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved,
-                                                s.detail));
-            for (const auto& f : s.findings)
+                                                std::move(s.detail)));
+            for (auto& f : s.findings)
                 if (std::find(findings.begin(), findings.end(), f) == findings.end())
-                    findings.push_back(f);
+                    findings.push_back(std::move(f));
         }
     }
 

@@ -182,6 +182,9 @@ UnitSizing ChainSolver::size(const AirHandlingUnit& unit)
         double bestAspectError = 1e300;
         const double minSide = std::max(grid, 0.3);
         for (double hh = onGrid(minSide); hh <= 5.0 + 1e-9; hh += grid) {
+            // Wider than high: no taller deck can beat the best area found.
+            if (hh * hh > bestArea + 1e-9)
+                break;
             const double ww = onGrid(std::max(needed / hh, hh));
             const double aspect = ww / hh;
             if (aspect > 2.5 + 1e-9)
