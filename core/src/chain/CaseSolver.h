@@ -15,7 +15,9 @@
 // pass the extract air reaching the exchangers. Fans take the path's pressure
 // drops as known at the time: this pass's for the sections before them, the last
 // pass's for those after (in the first pass those are computed ahead once, with
-// the air at the fan's inlet).
+// the air at the fan's inlet). From the second iteration on, a fan whose drops
+// moved in its own pass is computed again with the sections after it (up to
+// kFanSweeps passes); the first iteration leaves that to the second.
 
 #include "airwright/core/InputError.h"
 #include "airwright/core/chain/AirHandlingUnit.h"
