@@ -519,6 +519,21 @@ ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& 
     Psychro::MoistAirState supplyOut = coreSupply;
     if (ms <= 0.0) {
         supplyOut = point.supplyInlet;
+    } else if (o.beta > 0.0 && o.supplyClampNeeded) {
+        // A wheel's fog is droplets carried by the air, not water drained in the
+        // matrix: the unclamped core outlet (air plus its liquid, the same total
+        // enthalpy, ASHRAE Fundamentals ch. 1) mixes with the bypass air, and what
+        // is still liquid after the mix drops out once, at the mixed temperature.
+        // So all the supply side's condensate leaves at the supply outlet's
+        // temperature, which HeatRecoveryEvaluator relies on.
+        o.condS = 0.0;
+        const double fa = ms / msTotal;
+        const double w = fa * o.wsOut + (1.0 - fa) * o.supW;
+        const double h = fa * raw::enthalpy(o.tsOut, o.wsOut) + (1.0 - fa) * raw::enthalpy(o.supT, o.supW);
+        const double t = std::clamp(raw::dryBulbFromEnthalpy(h, w), Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC);
+        const Psychro::ProcessOutcome mixed = Psychro::clampToSaturation(celsius(t), kilogramsPerKilogram(w), point.supplyInlet.pressure());
+        supplyOut = mixed.outlet;
+        o.condS = msTotal * toKilogramsPerKilogram(mixed.condensate);
     } else if (o.beta > 0.0) {
         const Psychro::ProcessOutcome mixed =
             Psychro::mix(coreSupply, kilogramsPerSecond(ms), point.supplyInlet, kilogramsPerSecond(msTotal - ms));

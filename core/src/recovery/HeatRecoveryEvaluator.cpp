@@ -3,6 +3,8 @@
 #include "airwright/core/InputError.h"
 #include "airwright/core/NumberFormat.h"
 #include "airwright/core/psychro/AirProcesses.h"
+#include "airwright/core/psychro/PsychroRaw.h"
+#include "airwright/core/psychro/Psychrometrics.h"
 #include "airwright/core/recovery/BracketedRoot.h"
 #include "airwright/core/recovery/FrostOnset.h"
 
@@ -45,18 +47,36 @@ bool sameStream(const Sections::AirStream& a, const Sections::AirStream& b)
     return a.state == b.state && a.dryAir.value() == b.dryAir.value();
 }
 
-// Mixing the crossing flows back in can fog (cold purge air into humid exhaust, or
-// humid transferred extract air into cold supply): the water that drops out is
-// added to fog, so that it leaves as condensate instead of vanishing.
-Sections::AirStream mixStreams(const Sections::AirStream& a, const Sections::AirStream& b, MassFlow& fog)
+// Mixing the crossing flows of a wheel back in. The core outlet a may carry
+// liquid: a wheel's fog is droplets blown out of the matrix with the air
+// (AirToAirExchanger::evaluate clamps its outlets), and `liquid` (kg/s, at a's
+// temperature) goes into the mix with its enthalpy, 4186 t J/kg as in the psychro
+// layer. The mix conserves dry air, water and enthalpy (ASHRAE Fundamentals
+// ch. 1, adiabatic mixing; steady-flow energy balance); what is liquid after it
+// drops out once, at the mixed temperature, and is added to fog. So each side's
+// condensate leaves at that side's outlet temperature, whatever the leakage.
+Sections::AirStream mixStreams(const Sections::AirStream& a, MassFlow liquid, const Sections::AirStream& b,
+                               MassFlow& fog)
 {
-    if (b.dryAir.value() <= 0.0)
+    const double ma = a.dryAir.value(), mb = std::max(b.dryAir.value(), 0.0), ml = liquid.value();
+    if (ma <= 0.0 && mb <= 0.0)
         return a;
-    if (a.dryAir.value() <= 0.0)
+    if (mb <= 0.0 && ml <= 0.0)
+        return a;
+    if (ma <= 0.0)
         return b;
-    const auto mixed = Psychro::mix(a.state, a.dryAir, b.state, b.dryAir);
-    fog += (a.dryAir + b.dryAir) * mixed.condensate;
-    return {mixed.outlet, a.dryAir + b.dryAir};
+    const double wa = toKilogramsPerKilogram(a.state.humidityRatio());
+    const double ha = toJoulesPerKilogram(a.state.enthalpy());
+    const double wb = mb > 0.0 ? toKilogramsPerKilogram(b.state.humidityRatio()) : 0.0;
+    const double hb = mb > 0.0 ? toJoulesPerKilogram(b.state.enthalpy()) : 0.0;
+    const double m = ma + mb;
+    const double w = (ma * wa + mb * wb + ml) / m;
+    const double h = (ma * ha + mb * hb + ml * Psychro::detail::liquidWaterEnthalpy(toCelsius(a.state.dryBulb()))) / m;
+    const double t = std::clamp(Psychro::detail::dryBulbFromEnthalpy(h, w), Psychro::kMinTemperatureC,
+                                Psychro::kMaxTemperatureC);
+    const auto mixed = Psychro::clampToSaturation(celsius(t), kilogramsPerKilogram(w), a.state.pressure());
+    fog += kilogramsPerSecond(m) * mixed.condensate;
+    return {mixed.outlet, kilogramsPerSecond(m)};
 }
 
 } // namespace
@@ -337,9 +357,17 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
     const Sections::AirStream coreSupplyOut{performance.supplyOutlet, supplyCore};
     const Sections::AirStream coreExtractOut{performance.extractOutlet, extractCore};
     out.extractIn = extractIn;
-    MassFlow fog;
-    out.supplyOut = mixStreams(coreSupplyOut, {extractIn.state, transfer}, fog);
-    out.extractOut = mixStreams(coreExtractOut, {point.supplyInlet, purge}, fog);
+    MassFlow condensate;
+    if (rotary) {
+        // The core's fog rides into the leakage mix (see mixStreams).
+        out.supplyOut = mixStreams(coreSupplyOut, performance.supplyCondensate, {extractIn.state, transfer}, condensate);
+        out.extractOut = mixStreams(coreExtractOut, performance.extractCondensate, {point.supplyInlet, purge}, condensate);
+    } else {
+        // Plates and loops drain their condensate at the wet surface; no crossing flows.
+        out.supplyOut = coreSupplyOut;
+        out.extractOut = coreExtractOut;
+        condensate = performance.extractCondensate + performance.supplyCondensate;
+    }
     out.supplyPressureDrop = performance.supplyPressureDrop;
     out.extractPressureDrop = performance.extractPressureDrop;
     out.rotorSpeedRatio = point.rotorSpeedRatio;
@@ -352,7 +380,7 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
     d.regulationThermalEfficiency = m_regulationEfficiency;
     d.recovered = performance.totalHeat;
     d.bypassFraction = point.bypassFraction;
-    d.condensate = performance.extractCondensate + performance.supplyCondensate + fog;
+    d.condensate = condensate;
     d.leakage = {m_spec.exhaustAirTransfer, m_spec.outdoorAirCorrection};
     d.cleanExtractPressureDrop = performance.extractPressureDrop;
     d.frostAlarmPressureDrop = performance.extractPressureDrop + pascals(kFrostAlarmRisePa);

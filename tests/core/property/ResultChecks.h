@@ -12,11 +12,8 @@ namespace Airwright::Core::Property {
 void expectAllFinite(const Chain::UnitResult& result);
 
 // Per section: dry air, water and energy balances (tolerances in the .cpp); per
-// coupled section: both sides together. CoupledChecks::PlatesAndLoops leaves out
-// the coupled balances of wheels and mixing boxes, which do not yet close on
-// every random project (DEVELOPERS.md, known defects).
-enum class CoupledChecks { All, PlatesAndLoops };
-void expectBalances(const Chain::CaseResult& result, CoupledChecks coupled = CoupledChecks::All);
+// coupled section: both sides together.
+void expectBalances(const Chain::CaseResult& result);
 
 // A case that did not settle carries a chain.not_converged finding that names a
 // section of the unit.

@@ -5,4 +5,5 @@ list(APPEND AIRWRIGHT_CORE_TEST_SOURCES
     core/recovery/BracketedRootTest.cpp
     core/recovery/HeatRecoveryEvaluatorTest.cpp
     core/recovery/AirToAirExchangerControlTest.cpp
+    core/recovery/WheelLeakageBalanceTest.cpp
 )
