@@ -621,13 +621,27 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
     const double target = toCelsius(setpoint);
     checkRange("supply temperature setpoint", target, Psychro::kMinTemperatureC, Psychro::kMaxTemperatureC, "C",
                "-100 .. 200 C");
-    const double tFull = start && start->fullRecoveryOutlet ? toCelsius(*start->fullRecoveryOutlet) : tOutAt(full);
+    // Full recovery: evaluated in full when the last solve ended there (or there
+    // is none), as it most likely ends there again (out of reach in cold weather)
+    // and then that evaluation is the result.
+    std::optional<ExchangerPerformance> fullPerformance;
+    double tFull = 0.0;
+    if (start && start->fullRecoveryOutlet) {
+        tFull = toCelsius(*start->fullRecoveryOutlet);
+    } else if (!start || toFraction(start->control) == full) {
+        fullPerformance = at(full);
+        tFull = toCelsius(fullPerformance->supplyOutlet.dryBulb());
+    } else {
+        tFull = tOutAt(full);
+    }
     const double reach = tFull - tIn;
     const double want = target - tIn;
     const double chord = reach / (full - none);
     // The result with what the solve learnt on the way.
     auto result = [&](double c, bool reached) {
-        SetpointControlResult r{fraction(c), reached, at(c), celsius(tFull), std::nullopt};
+        SetpointControlResult r{fraction(c), reached,
+                                c == full && fullPerformance ? std::move(*fullPerformance) : at(c), celsius(tFull),
+                                std::nullopt};
         if (evaluations >= 2 && lastC[0] != lastC[1]) {
             const double slope = (lastT[0] - lastT[1]) / (lastC[0] - lastC[1]);
             if (slope * chord > 0.0 && std::isfinite(slope))
