@@ -9,7 +9,10 @@
 #include "airwright/core/project/ProjectFile.h"
 #include "airwright/ui/export/SchedulePdf.h"
 
+#include <QDir>
+#include <QFile>
 #include <QGuiApplication>
+#include <QTemporaryDir>
 
 #include <algorithm>
 #include <cctype>
@@ -31,7 +34,9 @@ std::string lowerExtension(const std::string& file)
 }
 
 // A command-line run has no QGuiApplication: make one for the PDF's fonts, on
-// the offscreen platform unless the caller chose another.
+// the offscreen platform unless the caller chose another. Without a session
+// (a build machine, a cron job) XDG_RUNTIME_DIR is unset and Qt would warn about
+// it on stderr; the run then gets a private one of its own, removed at the end.
 class GuiForRun {
 public:
     GuiForRun()
@@ -40,10 +45,19 @@ public:
             return;
         if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
             qputenv("QT_QPA_PLATFORM", "offscreen");
+        if (qEnvironmentVariableIsEmpty("XDG_RUNTIME_DIR")) {
+            m_runtime = std::make_unique<QTemporaryDir>(QDir::tempPath() + "/airwright-runtime-XXXXXX");
+            if (m_runtime->isValid()) {
+                QFile::setPermissions(m_runtime->path(), QFileDevice::ReadOwner | QFileDevice::WriteOwner
+                                                             | QFileDevice::ExeOwner);
+                qputenv("XDG_RUNTIME_DIR", QFile::encodeName(m_runtime->path()));
+            }
+        }
         m_app = std::make_unique<QGuiApplication>(m_argc, m_argv);
     }
 
 private:
+    std::unique_ptr<QTemporaryDir> m_runtime;
     int m_argc = 1;
     char m_name[16] = "airwright-cli";
     char* m_argv[2] = {m_name, nullptr};
