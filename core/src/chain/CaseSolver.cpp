@@ -615,7 +615,7 @@ CaseResult CaseSolver::run()
     int iteration = 0;
     bool converged = false;
     double lastChange = 0.0;
-    std::string unsettled;
+    const std::string* unsettled = nullptr; // id of the section that moved most, in the unit
     extractPass(true, 0);
     std::vector<double> before(3 * (m_supply.size() + m_extract.size()));
     while (iteration < ChainSolver::kMaxIterations) {
@@ -646,9 +646,9 @@ CaseResult CaseSolver::run()
             break;
         }
         lastChange = change;
-        unsettled = where ? *where : std::string();
+        unsettled = where;
     }
-    finish(result, iteration, converged, unsettled);
+    finish(result, iteration, converged, unsettled ? *unsettled : std::string());
     return result;
 }
 

@@ -96,8 +96,14 @@ ProcessOutcome heatToTemperature(const MoistAirState& inlet, AbsoluteTemperature
     const double w = toKilogramsPerKilogram(inlet.humidityRatio());
     const double p = toPascals(inlet.pressure());
     const double pws = detail::satPressure(t2);
-    if (pws < p && w > detail::humidityRatioFromVapourPressure(pws, p) * (1.0 + detail::kSaturationTolerance))
+    if (!(pws < p))
+        return unchanged(t2, w, inlet.pressure());
+    const double ws = detail::humidityRatioFromVapourPressure(pws, p);
+    if (w > ws * (1.0 + detail::kSaturationTolerance))
         return saturatedAt(t2, w, p, inlet.pressure());
+    if (w <= ws) // known to be below saturation: no second saturation check
+        return {detail::stateBelowSaturation(outletTdb, inlet.humidityRatio(), inlet.pressure()),
+                kilogramsPerKilogram(0.0), false};
     return unchanged(t2, w, inlet.pressure());
 }
 
@@ -117,8 +123,9 @@ ProcessOutcome heatByDuty(const MoistAirState& inlet, Power duty, MassFlow dryAi
         throw InputError("heat duty", q, "W",
                          formatNumber(m * cp * (kMinTemperatureC - t1)) + " .. "
                              + formatNumber(m * cp * (kMaxTemperatureC - t1)) + " W (outlet -100 .. 200 °C)");
-    if (q >= 0.0) // heating at constant W moves away from saturation: no fog to settle
-        return unchanged(t2, w, inlet.pressure());
+    if (q >= 0.0) // heating at constant W moves away from saturation: no fog, no check
+        return {detail::stateBelowSaturation(celsius(t2), inlet.humidityRatio(), inlet.pressure()),
+                kilogramsPerKilogram(0.0), false};
     return clampToSaturation(celsius(t2), inlet.humidityRatio(), inlet.pressure());
 }
 

@@ -725,6 +725,15 @@ HumidityRatio checkedHumidityRatioAt(AbsoluteTemperature t, HumidityRatio w, Pre
     return kilogramsPerKilogram(checkedUnsaturated(tC, checkedHumidityRatio(w), satPressure(tC), p));
 }
 
+Ratio detail::relativeHumidityOf(const MoistAirState& state)
+{
+    // As relativeHumidityFromHumidityRatio: W is at most Ws (the factories clamp
+    // it), and above the boiling point pw / pws < 1 anyway.
+    const double pws = satPressure(toCelsius(state.dryBulb()));
+    const double pw = detail::vapourPressureFromHumidityRatio(state.humidityRatio().value(), state.pressure().value());
+    return fraction(std::min(1.0, pw / pws));
+}
+
 MoistAirState detail::stateBelowSaturation(AbsoluteTemperature tdb, HumidityRatio w, Pressure p)
 {
     checkedCelsius(tdb, "dry-bulb temperature");

@@ -154,7 +154,8 @@ SectionOutcome Filter::compute(const AirStream& inlet, const SectionContext& con
     detail.designDrop = designDrop() * scale;
     detail.alarmSetpoint = detail.finalDrop;
     detail.condition = context.filterCondition;
-    detail.relativeHumidity = inlet.state.relativeHumidity();
+    // The state is valid already: its relative humidity without the input checks.
+    detail.relativeHumidity = Psychro::detail::relativeHumidityOf(inlet.state);
 
     Pressure dp = detail.designDrop;
     if (context.filterCondition == FilterCondition::Initial)

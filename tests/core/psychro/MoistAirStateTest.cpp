@@ -8,6 +8,7 @@
 #include <cmath>
 #include <functional>
 #include <limits>
+#include <optional>
 #include <string>
 
 using namespace Airwright::Core;
@@ -173,3 +174,27 @@ INSTANTIATE_TEST_SUITE_P(
         InvalidRow{"BelowSaturationPressureZero", "pressure",
                    [] { detail::stateBelowSaturation(celsius(20.0), gramsPerKilogram(5.0), pascals(0.0)); }}),
     [](const ::testing::TestParamInfo<InvalidRow>& rowInfo) { return rowInfo.param.name; });
+
+TEST(MoistAirState, UncheckedRelativeHumidityEqualsTheCheckedOne)
+{
+    // detail::relativeHumidityOf skips the input checks of relativeHumidity() for
+    // states that are valid by construction; the value must be the same (1e-15,
+    // rounding), saturated and above the boiling point included.
+    int states = 0;
+    for (double t = -40.0; t <= 120.0; t += 7.5) {
+        for (double rh = 0.0; rh <= 1.0; rh += 0.125) {
+            for (double p : {60000.0, 101325.0}) {
+                std::optional<MoistAirState> s;
+                try {
+                    s = MoistAirState::fromDryBulbRelativeHumidity(celsius(t), fraction(rh), pascals(p));
+                } catch (const InputError&) {
+                    continue; // not a state (vapour above the total pressure)
+                }
+                ++states;
+                EXPECT_NEAR(detail::relativeHumidityOf(*s).value(), s->relativeHumidity().value(), 1e-15)
+                    << t << " C, " << rh << ", " << p << " Pa";
+            }
+        }
+    }
+    EXPECT_GT(states, 300); // most of the grid is a state
+}

@@ -14,6 +14,9 @@ namespace detail {
 // (the exchanger outlets): the range checks, without computing pws(t) again.
 // Not for any other use: W above saturation is not caught here.
 MoistAirState stateBelowSaturation(AbsoluteTemperature tdb, HumidityRatio w, Pressure p);
+// relativeHumidity() of a state without its input checks (a state is valid by
+// construction): for hot paths that ask it of every section's air.
+Ratio relativeHumidityOf(const MoistAirState& state);
 } // namespace detail
 
 class MoistAirState {
