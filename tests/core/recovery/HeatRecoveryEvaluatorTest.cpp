@@ -178,3 +178,28 @@ TEST(HeatRecoveryEvaluator, MemoryOfAnotherEvaluatorStartsEmpty)
     EXPECT_NEAR(fromB.detail.temperatureEffectiveness.value(), freshB.detail.temperatureEffectiveness.value(), 1e-9);
     EXPECT_EQ(fromB.detail.regulationThermalEfficiency.value(), freshB.detail.regulationThermalEfficiency.value());
 }
+
+TEST(HeatRecoveryEvaluator, WarmStartedFrostProtectionFindsTheSameBypass)
+{
+    // Frost protection by bypass, solved from the last pass's root (the chain's
+    // next pass) and afresh: the same root to the solve's tolerance (1e-4 of
+    // bypass share, kControlTolerance), as the outdoor air moves between passes by
+    // small steps and by a large one. The model against itself.
+    const HeatRecoveryEvaluator evaluator(plate(FrostStrategy::Bypass), kDesignFlow);
+    HeatRecoveryEvaluator::Memory memory;
+    HeatRecoveryInputs in;
+    in.extractIn = stream(21.0, 35.0, 3.0);
+    int protectedCases = 0;
+    for (double outdoor : {-12.0, -12.01, -11.9, -15.0, -8.0, -20.0}) {
+        in.supplyIn = stream(outdoor, 80.0, 3.0);
+        const HeatRecoveryOutcome& warm = evaluator.evaluate(in, memory);
+        const HeatRecoveryOutcome cold = evaluator.evaluate(in);
+        ASSERT_TRUE(cold.detail.frost.risk) << outdoor;
+        protectedCases += cold.detail.bypassFraction.value() > 0.0 ? 1 : 0;
+        EXPECT_NEAR(warm.detail.bypassFraction.value(), cold.detail.bypassFraction.value(), 2e-4) << outdoor;
+        EXPECT_NEAR(warm.detail.recovered.value(), cold.detail.recovered.value(),
+                    1e-3 * std::abs(cold.detail.recovered.value()))
+            << outdoor;
+    }
+    EXPECT_EQ(protectedCases, 6); // each point needed the bypass
+}
