@@ -645,7 +645,9 @@ CaseResult CaseSolver::run()
             converged = true;
             break;
         }
-        lastChange = change;
+        // The first iteration's change is measured from nothing (a zero snapshot):
+        // not a contraction, so the estimate starts from the second.
+        lastChange = iteration >= 2 ? change : 0.0;
         unsettled = where;
     }
     finish(result, iteration, converged, unsettled ? *unsettled : std::string());
