@@ -33,9 +33,11 @@ constexpr double kTypicalUpperEfficiency = 0.90;
 // and the energy balance closes exactly whatever it is (see coolWarmStream).
 constexpr double kWetSolveTolerance = 1e-4;
 // The solve ends without a further evaluation once an interpolation step is
-// shorter than this (BracketedRoot.h); the returned outlet is then typically
-// within 1e-6 K of the root (the secant's superlinear convergence).
-constexpr double kWetSolveAcceptStep = 1e-3;
+// shorter than this and at most a tenth of the step before it (BracketedRoot.h):
+// converging superlinearly, the returned outlet is then typically within 1e-5 K
+// of the root, well inside the tolerance (a test holds it to that).
+constexpr double kWetSolveAcceptStep = 1e-2;
+constexpr double kWetSolveAcceptRatio = 0.1;
 
 // Dry-air basis cp of moist air, the slope of ASHRAE eq. 30 at constant W.
 double moistCp(double w) { return raw::enthalpy(1.0, w) - raw::enthalpy(0.0, w); }
@@ -45,10 +47,22 @@ double moistCp(double w) { return raw::enthalpy(1.0, w) - raw::enthalpy(0.0, w);
 // heat of fusion of frost is not counted: frost is a fault the protection avoids).
 double condensateEnthalpy(double tC) { return raw::liquidWaterEnthalpy(tC); }
 
-void checkRange(const char* quantity, double v, double lo, double hi, const char* unit, const char* range)
+[[noreturn, gnu::cold, gnu::noinline]] void throwOutOfRange(const char* quantity, double v, const char* unit,
+                                                           const char* range)
 {
-    if (!(v >= lo && v <= hi))
-        throw InputError(quantity, v, unit, range);
+    throw InputError(quantity, v, unit, range);
+}
+
+[[noreturn, gnu::cold, gnu::noinline]] void throwFlowOutOfRange(const char* quantity, double m, double maxFlow)
+{
+    throw InputError(quantity, m, "kg/s", "above 0 .. " + formatNumber(maxFlow) + " kg/s (5 x rated)");
+}
+
+// Inline: the operating-point checks run on every evaluation of the solves.
+inline void checkRange(const char* quantity, double v, double lo, double hi, const char* unit, const char* range)
+{
+    if (!(v >= lo && v <= hi)) [[unlikely]]
+        throwOutOfRange(quantity, v, unit, range);
 }
 
 struct Side {
@@ -140,7 +154,9 @@ WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewP
         fHi = qDry - cw * (warm.t - hi); // b = 1 at the dew point: no rate call needed
     }
     const double t =
-        hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance, 100, kWetSolveAcceptStep).x;
+        hi == lo ? lo : findBracketedRoot(g, lo, hi, fLo, fHi, kWetSolveTolerance, 100, kWetSolveAcceptStep,
+                                                   kWetSolveAcceptRatio)
+                                     .x;
     const double q = qAir(t);
     const double ws = std::min(warm.w, satW(t));
     return {q, t, ws, warm.m * (warm.w - ws), meanSlope(t, q), bLastRate};
@@ -288,8 +304,8 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
     const double msTotal = toKilogramsPerSecond(point.supplyDryAirFlow);
     const double me = toKilogramsPerSecond(point.extractDryAirFlow);
     auto checkFlow = [maxFlow](const char* quantity, double m) {
-        if (!(m > 0.0 && m <= maxFlow))
-            throw InputError(quantity, m, "kg/s", "above 0 .. " + formatNumber(maxFlow) + " kg/s (5 x rated)");
+        if (!(m > 0.0 && m <= maxFlow)) [[unlikely]]
+            throwFlowOutOfRange(quantity, m, maxFlow);
     };
     checkFlow("supply dry-air flow", msTotal);
     checkFlow("extract dry-air flow", me);
@@ -340,8 +356,12 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
         return warmDew;
     };
     // Kelvin of the coldest surface above min(0 C, dew/frost point of the warm stream).
+    // A vapour pressure at or above the triple point's has its dew point at or
+    // above 0.01 C, so the limit is 0 C without computing it.
     const auto surfaceMargin = [&](double tSurface) {
-        const double limit = warmPw > 0.0 ? std::min(0.0, warmDewPoint()) : 0.0;
+        const double limit = warmPw >= raw::satPressureAtTriplePoint() || !(warmPw > 0.0)
+                                 ? 0.0
+                                 : std::min(0.0, warmDewPoint());
         return tSurface - limit;
     };
 

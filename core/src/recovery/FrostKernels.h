@@ -50,7 +50,13 @@ inline double coldCornerSurface(FlowArrangement arrangement, double tCold, doubl
 // Below 0 C and below the warm stream's dew/frost point (pws over ice there).
 inline bool surfaceFrosts(double tSurface, double warmVapourPressure)
 {
-    return tSurface < 0.0 && Psychro::detail::satPressure(tSurface) < warmVapourPressure;
+    if (!(tSurface < 0.0))
+        return false;
+    // pws over ice rises with t up to the triple point: a vapour pressure at or
+    // above that value frosts every surface below 0 C, no pws(t) needed.
+    if (warmVapourPressure >= Psychro::detail::satPressureAtTriplePoint())
+        return true;
+    return Psychro::detail::satPressure(tSurface) < warmVapourPressure;
 }
 
 // Largest W_line(t) - Ws(t) on the part of the line from (tCold, wCold) to

@@ -3,9 +3,11 @@
 #include "airwright/core/psychro/PsychroRaw.h"
 #include "airwright/core/recovery/AirToAirExchanger.h"
 #include "airwright/core/recovery/EffectivenessNtu.h"
+#include "airwright/core/recovery/ExchangerKind.h"
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <optional>
 #include <string>
@@ -195,6 +197,66 @@ TEST(AirToAirExchanger, CondensationRaisesTemperatureEffectiveness)
     // Saturated extract outlet when condensing.
     EXPECT_NEAR(toFraction(wet.extractOutlet.relativeHumidity()), 1.0, 1e-6);
 }
+
+struct WetCase {
+    const char* name;
+    ExchangerKind kind;
+    double tSup, rhSup, tExt, rhExt, supplyFlowRatio, extractFlowRatio;
+};
+
+class WetSurfaceRelation : public ::testing::TestWithParam<WetCase> {};
+
+// The wet-surface model's defining relation (AirToAirExchanger.h), rebuilt here
+// from the public eps-NTU functions: the condensing stream behaves as a stream
+// whose capacity rate and conductance are b times its dry ones, b the mean slope
+// of its enthalpy path, and its enthalpy drop (condensate included) equals the
+// eps-NTU heat rate at that b. Held to the solve's tolerance, 1e-4 K of the
+// condensing stream's outlet (expressed as a heat rate through b C dT).
+TEST_P(WetSurfaceRelation, OutletSatisfiesEffectivenessNtuAtTheEnthalpySlope)
+{
+    const WetCase& c = GetParam();
+    const AirToAirExchanger x = typical(c.kind);
+    const double mr = toKilogramsPerSecond(x.ratedDryAirFlow());
+    const double ms = c.supplyFlowRatio * mr, me = c.extractFlowRatio * mr;
+    const MoistAirState sup = air(c.tSup, c.rhSup), ext = air(c.tExt, c.rhExt);
+    const ExchangerPerformance p = x.evaluate(pointOf(sup, ms, ext, me));
+
+    const bool extractWarm = tC(ext) > tC(sup);
+    const MoistAirState& warmIn = extractWarm ? ext : sup;
+    const MoistAirState& coldIn = extractWarm ? sup : ext;
+    const MoistAirState& warmOut = extractWarm ? p.extractOutlet : p.supplyOutlet;
+    const double mWarm = extractWarm ? me : ms, mCold = extractWarm ? ms : me;
+    const double condensate = toKilogramsPerSecond(extractWarm ? p.extractCondensate : p.supplyCondensate);
+    ASSERT_GT(condensate, 0.0) << c.name << ": a case that condenses";
+
+    // Dry-air basis cp, 1006 + 1860 W J/(kg K) (ASHRAE Fundamentals 2017 ch. 1, eq. 32).
+    auto cp = [](const MoistAirState& s) { return 1006.0 + 1860.0 * wOf(s); };
+    const double dT = tC(warmIn) - tC(coldIn);
+    const double q = mWarm * (h(warmIn) - h(warmOut)) - condensate * hWater(tC(warmOut));
+    const double cWarm = mWarm * cp(warmIn), cCold = mCold * cp(coldIn);
+    const double b = q / (cWarm * (tC(warmIn) - tC(warmOut)));
+    ASSERT_GT(b, 1.0) << c.name;
+
+    // Conductance per side: half the rated overall resistance each, scaled with
+    // (flow / rated flow)^n (docs/heat-recovery.md).
+    const double n = toFraction(defaultHeatTransferExponent(c.kind));
+    const double side = 2.0 * toFraction(x.ratedNtu()) * mr * 1006.0;
+    const double haWarm = b * side * std::pow(mWarm / mr, n), haCold = side * std::pow(mCold / mr, n);
+    const double ua = 1.0 / (1.0 / haWarm + 1.0 / haCold);
+    const double cmin = std::min(b * cWarm, cCold), cmax = std::max(b * cWarm, cCold);
+    const double eps = toFraction(effectiveness(arrangementOf(c.kind), fraction(ua / cmin), fraction(cmin / cmax)));
+    EXPECT_NEAR(eps * cmin * dT, q, 1e-4 * b * cWarm) << c.name;
+}
+
+INSTANTIATE_TEST_SUITE_P(
+    AirToAirExchanger, WetSurfaceRelation,
+    ::testing::Values(WetCase{"counter_winter", ExchangerKind::PlateCounterFlow, -5, 90, 22, 50, 1, 1},
+                      WetCase{"cross_unbalanced", ExchangerKind::PlateCrossFlow, -8, 85, 24, 45, 0.8, 1.1},
+                      WetCase{"cross_counter_cold", ExchangerKind::PlateCrossCounterFlow, -10, 90, 22, 40, 0.9, 0.855},
+                      WetCase{"cross_counter_humid_extract", ExchangerKind::PlateCrossCounterFlow, 0, 80, 24, 70, 1, 1},
+                      WetCase{"counter_summer_supply_condenses", ExchangerKind::PlateCounterFlow, 32, 80, 22, 50, 1, 1},
+                      WetCase{"cross_low_flow", ExchangerKind::PlateCrossFlow, -15, 90, 21, 35, 0.3, 0.35}),
+    [](const ::testing::TestParamInfo<WetCase>& i) { return std::string(i.param.name); });
 
 TEST(AirToAirExchanger, SummerIsTheMirrorOfWinter)
 {

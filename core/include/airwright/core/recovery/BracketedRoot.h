@@ -25,9 +25,12 @@ struct BracketedRoot {
 // evaluating f there. Near a smooth root these steps converge superlinearly, so
 // the returned x is far closer to the root than the step; it saves the last
 // evaluation or two that only confirm the bracket. The caller must not need f(x).
+// acceptStepRatio < 1 asks for evidence of that convergence as well: the step
+// must also be at most this fraction of the step before it.
 template <class F>
 BracketedRoot findBracketedRoot(F&& f, double lo, double hi, double fLo, double fHi, double xTolerance,
-                                int maxEvaluations = 100, double acceptStepBelow = 0.0)
+                                int maxEvaluations = 100, double acceptStepBelow = 0.0,
+                                double acceptStepRatio = 1.0)
 {
     BracketedRoot out;
     double a = lo, b = hi, fa = fLo, fb = fHi;
@@ -67,7 +70,7 @@ BracketedRoot findBracketedRoot(F&& f, double lo, double hi, double fLo, double 
             if (2.0 * p < std::min(3.0 * half * q - std::abs(tol * q), std::abs(e * q))) {
                 e = d;
                 d = p / q;
-                if (std::abs(d) < acceptStepBelow) {
+                if (std::abs(d) < acceptStepBelow && std::abs(d) <= acceptStepRatio * std::abs(e)) {
                     out.x = b + d;
                     return out;
                 }
