@@ -17,6 +17,7 @@
 #include <array>
 #include <cmath>
 #include <cstddef>
+#include <limits>
 #include <optional>
 #include <string>
 #include <utility>
@@ -91,13 +92,17 @@ struct WarmOutcome {
 
 // warmDewPoint(): of the warm inlet, C (computed at most once per evaluation,
 // shared with the frost margin).
+// surelyDryAbove: an outlet above this temperature is known to stay dry (above
+// the inlet's dew point), so Ws(t) need not be computed for it.
 template <class Rate, class DewPoint>
-WarmOutcome coolWarmStream(const Side& warm, double tColdIn, DewPoint&& warmDewPoint, Rate rate)
+WarmOutcome coolWarmStream(const Side& warm, double tColdIn, double surelyDryAbove, DewPoint&& warmDewPoint, Rate rate)
 {
     const double cw = warm.capacity();
     double bLastRate = 1.0;
     const double qDry = rate(1.0);
     const double tDry = warm.t - qDry / cw;
+    if (tDry > surelyDryAbove)
+        return {qDry, tDry, warm.w, 0.0, 1.0, 1.0};
     // Saturation humidity ratio, remembering the last two: the solve asks again
     // for the temperatures it has just tried (tDry, and the root it returns, which
     // need not be the last one tried).
@@ -271,15 +276,20 @@ bool AirToAirExchanger::exceedsTypicalEfficiency() const
     return toFraction(m_rating.ratedTemperatureEfficiency) > kTypicalUpperEfficiency;
 }
 
-double AirToAirExchanger::conductancePerSide(double dryAirFlow) const
+AirToAirExchanger::Invariants AirToAirExchanger::invariants(const ExchangerOperatingPoint& point) const
 {
-    return m_ratedSideConductance * powerLaw(dryAirFlow / m_ratedMassFlow, m_htExponent);
-}
-
-double AirToAirExchanger::coilConductance(double dryAirFlow) const
-{
-    // The air side dominates a finned coil's resistance; the loop flow is constant.
-    return m_ratedCoilConductance * powerLaw(dryAirFlow / m_ratedMassFlow, m_htExponent);
+    // Rotors and plates: each side's film conductance; loops: the air side
+    // dominates a finned coil's resistance, the loop flow is constant.
+    Invariants r{powerLaw(toKilogramsPerSecond(point.supplyDryAirFlow) / m_ratedMassFlow, m_htExponent),
+                 powerLaw(toKilogramsPerSecond(point.extractDryAirFlow) / m_ratedMassFlow, m_htExponent),
+                 std::nullopt};
+    const bool extractWarm = point.extractInlet.dryBulb() > point.supplyInlet.dryBulb();
+    const Psychro::MoistAirState& warm = extractWarm ? point.extractInlet : point.supplyInlet;
+    const double pw = raw::vapourPressureFromHumidityRatio(toKilogramsPerKilogram(warm.humidityRatio()),
+                                                           toPascals(warm.pressure()));
+    if (pw >= raw::minSatPressure() && pw <= raw::maxSatPressure())
+        r.warmDewPoint = raw::dewPointFromVapourPressure(pw);
+    return r;
 }
 
 // Everything of one evaluation except the outlet states and pressure drops, in
@@ -297,7 +307,8 @@ struct AirToAirExchanger::CoreOutcome {
     std::optional<RunAroundLoopState> loop;
 };
 
-AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingPoint& point, bool frostFigures) const
+AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingPoint& point, bool frostFigures,
+                                                      const std::optional<Invariants>& known) const
 {
     const ExchangerKind kind = m_rating.kind;
     const double maxFlow = kMaxFlowOverRated * m_ratedMassFlow;
@@ -317,6 +328,10 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
     const Side supIn = sideOf(point.supplyInlet, msTotal * (1.0 - beta));
     const Side extIn = sideOf(point.extractInlet, me);
     const double ms = supIn.m;
+    // Conductance scale of the supply core flow msTotal (1 - beta) and of the extract flow.
+    const double totalSupplyScale = known ? known->supply : powerLaw(msTotal / m_ratedMassFlow, m_htExponent);
+    const double scaleSupply = beta > 0.0 ? totalSupplyScale * powerLaw(1.0 - beta, m_htExponent) : totalSupplyScale;
+    const double scaleExtract = known ? known->extract : powerLaw(me / m_ratedMassFlow, m_htExponent);
 
     CoreOutcome o;
     o.msTotal = msTotal;
@@ -350,11 +365,15 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
     bool warmDewKnown = false;
     const auto warmDewPoint = [&] {
         if (!warmDewKnown) {
-            warmDew = raw::dewPointFromVapourPressure(warmPw);
+            warmDew = known && known->warmDewPoint ? *known->warmDewPoint : raw::dewPointFromVapourPressure(warmPw);
             warmDewKnown = true;
         }
         return warmDew;
     };
+    // Above this a warm outlet is dry without testing Ws(t) (the margin covers the
+    // dew point's rounding, far below 1e-6 K).
+    const double surelyDryAbove =
+        known && known->warmDewPoint ? *known->warmDewPoint + 1e-6 : std::numeric_limits<double>::infinity();
     // Kelvin of the coldest surface above min(0 C, dew/frost point of the warm stream).
     // A vapour pressure at or above the triple point's has its dew point at or
     // above 0.01 C, so the limit is 0 C without computing it.
@@ -370,15 +389,15 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
         const double cp = toJoulesPerKilogramKelvin(m_rating.loopFluidSpecificHeat);
         double tFluidIntoWarmCoil = cold.t, q = 0.0;
         if (ms > 0.0 && dT > 0.0) {
-            const double uaCold = coilConductance(cold.m);
-            const double uaWarm = coilConductance(warm.m);
+            const double uaCold = m_ratedCoilConductance * (extractWarm ? scaleSupply : scaleExtract);
+            const double uaWarm = m_ratedCoilConductance * (extractWarm ? scaleExtract : scaleSupply);
             auto coil = [cf](double ua, double c) {
                 const double cmin = std::min(c, cf), cmax = std::max(c, cf);
                 return Kernels::counterFlow(std::min(ua / cmin, kMaxNtu), cmin / cmax) * cmin;
             };
             const double epsCminCold = coil(uaCold, cCold);
             auto rate = [&](double b) { return dT / (1.0 / coil(b * uaWarm, b * cWarm) + 1.0 / epsCminCold - 1.0 / cf); };
-            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDewPoint, rate);
+            const WarmOutcome w = coolWarmStream(warm, cold.t, surelyDryAbove, warmDewPoint, rate);
             q = w.q;
             tFluidIntoWarmCoil = warm.t - q / coil(w.b * uaWarm, w.b * cWarm);
             const double tColdOut = cold.t + q / cCold;
@@ -400,7 +419,8 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
     } else if (isPlate(kind)) {
         if (ms > 0.0 && dT > 0.0) {
             const FlowArrangement arrangement = arrangementOf(kind);
-            const double haWarm = conductancePerSide(warm.m), haCold = conductancePerSide(cold.m);
+            const double haWarm = m_ratedSideConductance * (extractWarm ? scaleExtract : scaleSupply);
+            const double haCold = m_ratedSideConductance * (extractWarm ? scaleSupply : scaleExtract);
             // Cross-counter passes go through the memo, where the cold corner below
             // finds the pass of the converged step again.
             const bool crossCounter = arrangement == FlowArrangement::CrossCounterFlow;
@@ -417,7 +437,7 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
                         : Kernels::effectiveness(arrangement, n, cr, kCrossCounterFlowPasses);
                 return eps * cmin * dT;
             };
-            const WarmOutcome w = coolWarmStream(warm, cold.t, warmDewPoint, rate);
+            const WarmOutcome w = coolWarmStream(warm, cold.t, surelyDryAbove, warmDewPoint, rate);
             (extractWarm ? teOut : tsOut) = w.tOut;
             (extractWarm ? weOut : wsOut) = w.wOut;
             (extractWarm ? condE : condS) = w.condensate;
@@ -440,7 +460,8 @@ AirToAirExchanger::CoreOutcome AirToAirExchanger::core(const ExchangerOperatingP
     } else { // rotors
         if (ms > 0.0) {
             const double cs = supIn.capacity(), ce = extIn.capacity();
-            const double ua = 1.0 / (1.0 / conductancePerSide(ms) + 1.0 / conductancePerSide(me));
+            const double ua =
+                1.0 / (1.0 / (m_ratedSideConductance * scaleSupply) + 1.0 / (m_ratedSideConductance * scaleExtract));
             const double cmin = std::min(cs, ce), cmax = std::max(cs, ce);
             const double rotorRatio = toFraction(m_rating.ratedRotorCapacityRatio) * speed * m_ratedCapacityRate / cmin;
             const double eps = Kernels::counterFlow(std::min(ua / cmin, kMaxNtu), cmax > 0.0 ? cmin / cmax : 0.0)
@@ -496,10 +517,16 @@ AirToAirExchanger::ControlFigures AirToAirExchanger::controlFigures(const Exchan
     return figures(point, true);
 }
 
-AirToAirExchanger::ControlFigures AirToAirExchanger::figures(const ExchangerOperatingPoint& point,
-                                                             bool frostFigures) const
+AirToAirExchanger::ControlFigures AirToAirExchanger::controlFigures(const ExchangerOperatingPoint& point,
+                                                                    const Invariants& known) const
 {
-    const CoreOutcome o = core(point, frostFigures);
+    return figures(point, true, known);
+}
+
+AirToAirExchanger::ControlFigures AirToAirExchanger::figures(const ExchangerOperatingPoint& point, bool frostFigures,
+                                                             const std::optional<Invariants>& known) const
+{
+    const CoreOutcome o = core(point, frostFigures, known);
     double tSup = o.tsOut;
     bool exact = !o.supplyClampNeeded;
     if (o.ms <= 0.0) {
@@ -515,14 +542,20 @@ AirToAirExchanger::ControlFigures AirToAirExchanger::figures(const ExchangerOper
             exact = false;
     }
     if (!exact)
-        return {evaluate(point).supplyOutlet.dryBulb(), o.margin};
+        return {evaluate(point, known).supplyOutlet.dryBulb(), o.margin};
     return {celsius(tSup), o.margin};
 }
 
 ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& point) const
 {
+    return evaluate(point, std::nullopt);
+}
+
+ExchangerPerformance AirToAirExchanger::evaluate(const ExchangerOperatingPoint& point,
+                                                 const std::optional<Invariants>& known) const
+{
     const ExchangerKind kind = m_rating.kind;
-    CoreOutcome o = core(point, true);
+    CoreOutcome o = core(point, true, known);
     const double msTotal = o.msTotal, ms = o.ms, me = o.me;
 
     // Outlet states; a supersaturated rotor outlet is brought back to saturation.
@@ -623,13 +656,16 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
         (rotor ? p.rotorSpeedRatio : p.bypassFraction) = fraction(c);
         return p;
     };
-    auto at = [&](double c) { return evaluate(pointAt(c)); };
+    // Only bypass or speed changes from here on (core() checks the flows before
+    // using what invariants() worked out from them).
+    const std::optional<Invariants> invariant = invariants(point);
+    auto at = [&](double c) { return evaluate(pointAt(c), invariant); };
     // The last two evaluations of the solve, for the local slope it reports.
     double lastC[2] = {0.0, 0.0}, lastT[2] = {0.0, 0.0};
     int evaluations = 0;
     // Only the supply outlet temperature matters inside the solve.
     auto tOutAt = [&](double c) {
-        const double t = toCelsius(figures(pointAt(c), false).supplyOutlet);
+        const double t = toCelsius(figures(pointAt(c), false, invariant).supplyOutlet);
         lastC[1] = lastC[0];
         lastT[1] = lastT[0];
         lastC[0] = c;

@@ -241,10 +241,11 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
             Ratio& control = bySpeed ? point.rotorSpeedRatio : point.bypassFraction;
             const double frosting = control.value();
             const double safe = bySpeed ? kLeastControl : 1.0 - kLeastControl;
+            const AirToAirExchanger::Invariants invariant = m_exchanger.invariants(point);
             const auto margin = [&](double x) {
                 auto trial = point;
                 (bySpeed ? trial.rotorSpeedRatio : trial.bypassFraction) = fraction(x);
-                return m_exchanger.controlFigures(trial).frostMargin;
+                return m_exchanger.controlFigures(trial, invariant).frostMargin;
             };
             // Warm start (the chain's next pass): secant steps from the last root,
             // each aimed a little past so that the root is soon bracketed.

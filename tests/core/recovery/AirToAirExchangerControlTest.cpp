@@ -63,6 +63,16 @@ TEST_P(ControlFigures, AgreeWithTheFullEvaluation)
     EXPECT_NEAR(toCelsius(quick.supplyOutlet), toCelsius(full.supplyOutlet.dryBulb()), 1e-9) << c.name;
     EXPECT_EQ(quick.frostMargin, full.frostMargin) << c.name;
     EXPECT_EQ(quick.frostMargin < 0.0, full.frostRisk) << c.name;
+
+    // With what a solve works out once, from the point at another control value:
+    // the same figures, the flow scaling split as (m/m_r)^n (1 - bypass)^n (rounding).
+    ExchangerOperatingPoint other = p;
+    other.bypassFraction = fraction(0.0);
+    other.rotorSpeedRatio = fraction(1.0);
+    const AirToAirExchanger::ControlFigures reused = x.controlFigures(p, x.invariants(other));
+    EXPECT_NEAR(toCelsius(reused.supplyOutlet), toCelsius(quick.supplyOutlet), 1e-9) << c.name;
+    EXPECT_NEAR(reused.frostMargin, quick.frostMargin, 1e-9) << c.name;
+    EXPECT_EQ(reused.frostMargin < 0.0, full.frostRisk) << c.name;
 }
 
 INSTANTIATE_TEST_SUITE_P(

@@ -68,6 +68,19 @@ public:
     };
     ControlFigures controlFigures(const ExchangerOperatingPoint& point) const;
 
+    // What a solve that varies only bypass or speed (or nothing else of the point)
+    // can work out once: the conductances' (flow / rated flow)^n at the point's
+    // full supply flow and its extract flow (the bypass share enters as
+    // (1 - bypass)^n), and the dew point of the warmer inlet (empty when too dry
+    // to have one in range). Passed back with a point that differs from the one
+    // it came from in bypass or speed only; anything else gives wrong figures.
+    struct Invariants {
+        double supply = 1.0, extract = 1.0;
+        std::optional<double> warmDewPoint; // C
+    };
+    Invariants invariants(const ExchangerOperatingPoint& point) const;
+    ControlFigures controlFigures(const ExchangerOperatingPoint& point, const Invariants& known) const;
+
     // Bypass fraction (plates, loops) or rotor speed ratio (rotors) that brings
     // the supply outlet to the setpoint without overshooting it, by a bracketed
     // solve between zero and full recovery (the rest of the point unchanged).
@@ -91,11 +104,13 @@ public:
 private:
     struct CoreOutcome;
     // frostFigures false: the cold-corner surface, frost risk and margin are left
-    // out (the setpoint control needs only the supply outlet).
-    CoreOutcome core(const ExchangerOperatingPoint& point, bool frostFigures) const;
-    ControlFigures figures(const ExchangerOperatingPoint& point, bool frostFigures) const;
-    double conductancePerSide(double dryAirFlow) const;
-    double coilConductance(double dryAirFlow) const;
+    // out (the setpoint control needs only the supply outlet). known: the point's
+    // invariants() when the caller has them.
+    CoreOutcome core(const ExchangerOperatingPoint& point, bool frostFigures,
+                     const std::optional<Invariants>& known = std::nullopt) const;
+    ControlFigures figures(const ExchangerOperatingPoint& point, bool frostFigures,
+                           const std::optional<Invariants>& known = std::nullopt) const;
+    ExchangerPerformance evaluate(const ExchangerOperatingPoint& point, const std::optional<Invariants>& known) const;
 
     ExchangerRating m_rating;
     double m_ratedMassFlow = 0.0;        // kg/s dry air
