@@ -43,7 +43,7 @@ inline double crossFlowCminMixed(double n, double cr)
     return -std::expm1(std::expm1(-cr * n) / cr);
 }
 
-// 1/k for k = 0 .. kReciprocalCount - 1 (entry 0 unused).
+// 1/k and 1/(k (k+1)) for k = 0 .. kReciprocalCount - 1 (entry 0 unused).
 inline constexpr int kReciprocalCount = 64;
 inline constexpr auto kReciprocals = [] {
     struct Table {
@@ -54,9 +54,19 @@ inline constexpr auto kReciprocals = [] {
         t.v[k] = 1.0 / k;
     return t;
 }();
+inline constexpr auto kPairReciprocals = [] {
+    struct Table {
+        double v[kReciprocalCount];
+        constexpr double operator[](int k) const { return v[k]; }
+    } t{};
+    for (int k = 1; k < kReciprocalCount; ++k)
+        t.v[k] = 1.0 / (static_cast<double>(k) * (k + 1));
+    return t;
+}();
 
-// Exact series for unmixed cross-flow (see EffectivenessNtu.h). P(k, x) is kept
-// as 1 - e^-x sum_{m<k} x^m/m!, reduced term by term from -expm1(-x): the
+// Exact series for unmixed cross-flow (see EffectivenessNtu.h):
+// eps = (1 / x) sum_{k>=1} P(k, n) P(k, x), x = Cr n. P(k, x) is kept as
+// 1 - e^-x sum_{m<k} x^m/m!, reduced term by term from -expm1(-x): the
 // subtraction stays accurate to ~1e-16 absolute, which is what the sum needs.
 inline double crossFlowBothUnmixed(double n, double cr)
 {
@@ -80,28 +90,37 @@ inline double crossFlowBothUnmixed(double n, double cr)
     split(n, tN, pN);
     split(x, tX, pX);
     double sum = pN * pX;
-    // Adds term k given 1/k; false once the terms no longer count (or P has
-    // reached its rounding floor).
-    auto addTerm = [&](double invK) {
-        tN *= n * invK;
-        tX *= x * invK;
-        pN -= tN;
-        pX -= tX;
-        if (!(std::min(pN, pX) > 0.0))
+    // Terms k and k + 1 together, both from the terms of k - 1 (t_k = t_{k-1} v / k,
+    // t_{k+1} = t_{k-1} v^2 / (k (k+1))): half the length of the chains of
+    // dependent operations of a term-by-term loop, which bound its speed. False
+    // once the terms no longer count (or P has reached its rounding floor).
+    const double n2 = n * n, x2 = x * x;
+    auto addPair = [&](double invK, double invPair) {
+        const double tN1 = tN * (n * invK), tX1 = tX * (x * invK);
+        tN *= n2 * invPair;
+        tX *= x2 * invPair;
+        const double pN1 = pN - tN1, pX1 = pX - tX1;
+        pN = pN1 - tN;
+        pX = pX1 - tX;
+        if (!(std::min(pN1, pX1) > 0.0))
             return false;
-        const double term = pN * pX;
-        sum += term;
-        return !(term < 1e-16 * sum);
+        const double first = pN1 * pX1;
+        if (!(std::min(pN, pX) > 0.0)) {
+            sum += first;
+            return false;
+        }
+        const double second = pN * pX;
+        sum += first + second;
+        return !(second < 1e-16 * sum);
     };
-    // 1/k from a table while it lasts: the loop runs about 10 to 30 times at
-    // usual NTU, and a multiplication is far cheaper than two divisions. Two
-    // loops rather than a test per term for which of the two to use.
+    // 1/k from tables while they last: the loop runs about 5 to 15 times at
+    // usual NTU, and multiplications are far cheaper than divisions.
     int k = 1;
-    while (k < kReciprocalCount && addTerm(kReciprocals[k]))
-        ++k;
-    if (k == kReciprocalCount)
-        while (k < 2000 && addTerm(1.0 / k))
-            ++k;
+    while (k + 1 < kReciprocalCount && addPair(kReciprocals[k], kPairReciprocals[k]))
+        k += 2;
+    if (k + 1 >= kReciprocalCount)
+        while (k < 2000 && addPair(1.0 / k, 1.0 / (static_cast<double>(k) * (k + 1))))
+            k += 2;
     return sum / x;
 }
 
