@@ -102,11 +102,13 @@ bool sameStream(const Sections::AirStream& a, const Sections::AirStream& b)
     return a.state == b.state && a.dryAir.value() == b.dryAir.value();
 }
 
-SectionResult makeResult(const Section& section, PathKind path, const Sections::AirStream& inlet,
-                         const Sections::AirStream& outlet, Pressure pIn, Pressure dp, Velocity faceVelocity,
-                         MassFlow added, MassFlow removed, SectionDetail detail)
+// Fills the result appended to `list` in place (a result is a few hundred bytes:
+// built where it stays rather than moved there).
+void appendResult(std::vector<SectionResult>& list, const Section& section, PathKind path,
+                  const Sections::AirStream& inlet, const Sections::AirStream& outlet, Pressure pIn, Pressure dp,
+                  Velocity faceVelocity, MassFlow added, MassFlow removed, SectionDetail&& detail)
 {
-    SectionResult r;
+    SectionResult& r = list.emplace_back();
     r.id = section.id;
     r.typeKey = sectionTypeKey(section.spec);
     r.path = path;
@@ -122,7 +124,6 @@ SectionResult makeResult(const Section& section, PathKind path, const Sections::
     r.waterRemoved = removed;
     r.length = sectionLength(section.spec);
     r.detail = std::move(detail);
-    return r;
 }
 
 } // namespace
@@ -701,17 +702,16 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
         const Section& section = m_unit.supply[k];
         if (m_supplyCoupling[k] != kNone && m_couplings[m_supplyCoupling[k]].recovery) {
             const auto& out = *m_couplings[m_supplyCoupling[k]].recovery;
-            result.supply.push_back(makeResult(section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
-                                               s.pressureDrop, s.faceVelocity, MassFlow{}, MassFlow{}, out.detail));
+            appendResult(result.supply, section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
+                         s.pressureDrop, s.faceVelocity, MassFlow{}, MassFlow{}, SectionDetail{out.detail});
             for (Finding f : out.findings) {
                 if (f.sectionId.empty())
                     f.sectionId = section.id;
                 findings.push_back(std::move(f));
             }
         } else {
-            result.supply.push_back(makeResult(section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
-                                               s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved,
-                                               std::move(s.detail)));
+            appendResult(result.supply, section, PathKind::Supply, s.inlet, s.outlet, s.staticPressureIn,
+                         s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved, std::move(s.detail));
             findings.insert(findings.end(), std::make_move_iterator(s.findings.begin()),
                             std::make_move_iterator(s.findings.end()));
         }
@@ -724,14 +724,12 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
             const Coupling& c = m_couplings[m_extractCoupling[k]];
             const Section& supplySection = m_unit.supply[c.supplyIndex];
             // An exchanger's findings are already there from the supply side.
-            result.extract.push_back(makeResult(supplySection, PathKind::Extract, s.inlet, s.outlet,
-                                                s.staticPressureIn, s.pressureDrop, s.faceVelocity, MassFlow{},
-                                                s.waterRemoved, c.recovery ? SectionDetail{c.recovery->detail}
-                                                                           : std::move(s.detail)));
+            appendResult(result.extract, supplySection, PathKind::Extract, s.inlet, s.outlet, s.staticPressureIn,
+                         s.pressureDrop, s.faceVelocity, MassFlow{}, s.waterRemoved,
+                         c.recovery ? SectionDetail{c.recovery->detail} : std::move(s.detail));
         } else {
-            result.extract.push_back(makeResult(section, PathKind::Extract, s.inlet, s.outlet, s.staticPressureIn,
-                                                s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved,
-                                                std::move(s.detail)));
+            appendResult(result.extract, section, PathKind::Extract, s.inlet, s.outlet, s.staticPressureIn,
+                         s.pressureDrop, s.faceVelocity, s.waterAdded, s.waterRemoved, std::move(s.detail));
             for (auto& f : s.findings)
                 if (std::find(findings.begin(), findings.end(), f) == findings.end())
                     findings.push_back(std::move(f));
