@@ -317,17 +317,17 @@ void CaseSolver::computeSection(const Section& section, Slot& slot, const Sectio
         slot.staticPressureOut = pIn - slot.pressureDrop;
         return;
     }
-    Sections::SectionOutcome outcome;
-    std::visit(
-        [&](const auto& spec) {
+    // The detail is filled where it stays, the outcome built where it is kept.
+    Sections::SectionOutcome outcome = std::visit(
+        [&](const auto& spec) -> Sections::SectionOutcome {
             using T = std::decay_t<decltype(spec)>;
             if constexpr (std::is_same_v<T, Sections::MixingBox> || std::is_same_v<T, Recovery::HeatRecovery>
                           || std::is_same_v<T, CoupledSide>) {
                 throw Error("internal: coupled section " + section.id + " computed as a plain one");
             } else {
-                typename T::Detail d;
+                auto& d = slot.detail.template emplace<typename T::Detail>();
                 try {
-                    outcome = spec.compute(air, ctx, d);
+                    return spec.compute(air, ctx, d);
                 } catch (const SectionError&) {
                     throw;
                 } catch (const InputError& e) {
@@ -336,7 +336,6 @@ void CaseSolver::computeSection(const Section& section, Slot& slot, const Sectio
                     throw SectionError(placeOf(section), "in case '" + m_case.name + "', " + sectionTypeKey(section.spec)
                                                              + " '" + section.id + "': " + e.what());
                 }
-                slot.detail = std::move(d);
             }
         },
         section.spec);
