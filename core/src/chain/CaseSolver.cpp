@@ -108,22 +108,10 @@ void appendResult(std::vector<SectionResult>& list, const Section& section, Path
                   const Sections::AirStream& inlet, const Sections::AirStream& outlet, Pressure pIn, Pressure dp,
                   Velocity faceVelocity, MassFlow added, MassFlow removed, SectionDetail&& detail)
 {
-    SectionResult& r = list.emplace_back();
-    r.id = section.id;
-    r.typeKey = sectionTypeKey(section.spec);
-    r.path = path;
-    r.inlet = inlet;
-    r.outlet = outlet;
-    r.staticPressureIn = pIn;
-    r.staticPressureOut = pIn - dp;
-    r.inletFlow = volumeFlowOf(inlet);
-    r.faceVelocity = faceVelocity;
-    r.pressureDrop = dp;
-    r.duty = enthalpyFlowChange(inlet, outlet);
-    r.waterAdded = added;
-    r.waterRemoved = removed;
-    r.length = sectionLength(section.spec);
-    r.detail = std::move(detail);
+    // Every member in order (SectionResult.h), so nothing is first defaulted.
+    list.emplace_back(section.id, std::string(sectionTypeKey(section.spec)), path, inlet, outlet, pIn, pIn - dp,
+                      volumeFlowOf(inlet), faceVelocity, dp, enthalpyFlowChange(inlet, outlet), added, removed,
+                      sectionLength(section.spec), std::move(detail));
 }
 
 } // namespace
