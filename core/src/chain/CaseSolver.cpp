@@ -778,7 +778,6 @@ void CaseSolver::finish(CaseResult& result, int iterations, bool converged, cons
         e.staticPressureOut = e.staticPressureIn - e.pressureDrop;
         e.duty = e.outlet.dryAir * e.outlet.state.enthalpy() - e.inlet.dryAir * e.inlet.state.enthalpy();
         e.waterRemoved = c.recovery->detail.condensate;
-        e.detail = c.recovery->detail;
     }
 
     // Pressure relation at coupled exchangers: the supply side should be the higher,
