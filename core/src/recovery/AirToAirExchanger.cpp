@@ -721,37 +721,18 @@ SetpointControlResult AirToAirExchanger::controlSupplyTemperature(const Exchange
 
     auto f = [&](double c) { return tOutAt(c) - target; };
     if (start) {
-        // Secant steps from the last control value (the first along the chord
-        // from no to full recovery), each aimed a little past the secant root so
-        // that the root is soon bracketed; then Brent on that bracket.
-        const double lower = std::min(none, full), upper = std::max(none, full);
-        double x0 = std::clamp(toFraction(start->control), lower, upper);
-        double f0 = f(x0);
-        if (f0 == 0.0)
-            return result(x0, true);
+        // From the last control value, the first step along the last slope (or
+        // the chord from no to full recovery).
+        const double x0 = std::clamp(toFraction(start->control), std::min(none, full), std::max(none, full));
         double slope = chord;
         if (start->outletChangePerControl) {
             const double known = start->outletChangePerControl->value();
             if (known * chord > 0.0 && std::isfinite(known))
                 slope = known;
         }
-        for (int step = 0; step < 4; ++step) {
-            const double secant = x0 - f0 / slope;
-            const double past = std::max(1e-3 * std::abs(secant - x0), 2.0 * controlTolerance);
-            const double x1 = std::clamp(secant + (secant > x0 ? past : -past), lower, upper);
-            if (x1 == x0)
-                break;
-            const double f1 = f(x1);
-            if ((f1 > 0.0) != (f0 > 0.0) || f1 == 0.0) {
-                const double c = findBracketedRoot(f, x0, x1, f0, f1, controlTolerance, 100, acceptStep).x;
-                return result(c, true);
-            }
-            if (f1 == f0)
-                break;
-            slope = (f1 - f0) / (x1 - x0);
-            x0 = x1;
-            f0 = f1;
-        }
+        if (const auto c = findRootFromWarmStart(f, x0, f(x0), slope, std::min(none, full), std::max(none, full),
+                                                 2.0 * controlTolerance, controlTolerance, 100, acceptStep))
+            return result(*c, true);
     }
     const double c = findBracketedRoot(f, none, full, -want, reach - want, controlTolerance, 100, acceptStep).x;
     return result(c, true);

@@ -247,34 +247,17 @@ HeatRecoveryOutcome HeatRecoveryEvaluator::compute(const HeatRecoveryInputs& inp
                 (bySpeed ? trial.rotorSpeedRatio : trial.bypassFraction) = fraction(x);
                 return m_exchanger.controlFigures(trial, invariant).frostMargin;
             };
-            // Warm start (the chain's next pass): secant steps from the last root,
-            // each aimed a little past so that the root is soon bracketed.
+            // Warm start (the chain's next pass): from the last root, the first
+            // step along the secant through it and the frosting control value.
             const auto fromLastRoot = [&](double last) -> std::optional<double> {
                 const double lower = std::min(frosting, safe), upper = std::max(frosting, safe);
-                double xa = frosting, fa = performance.frostMargin; // frosting: fa < 0
-                double xb = std::clamp(last, lower, upper);
-                if (xb == xa)
+                const double xb = std::clamp(last, lower, upper);
+                if (xb == frosting)
                     return std::nullopt;
-                double fb = margin(xb);
-                for (int step = 0; step < 4; ++step) {
-                    if (fb == 0.0)
-                        return xb;
-                    if (fb == fa)
-                        return std::nullopt;
-                    const double secant = std::clamp(xb - fb * (xb - xa) / (fb - fa), lower, upper);
-                    const double past = std::max(1e-3 * std::abs(secant - xb), 2.0 * kAcceptStep);
-                    const double x1 = std::clamp(secant + (secant > xb ? past : -past), lower, upper);
-                    if (x1 == xb)
-                        return std::nullopt;
-                    const double f1 = margin(x1);
-                    if ((f1 >= 0.0) != (fb >= 0.0))
-                        return findBracketedRoot(margin, xb, x1, fb, f1, kControlTolerance, 40, kAcceptStep).x;
-                    xa = xb;
-                    fa = fb;
-                    xb = x1;
-                    fb = f1;
-                }
-                return std::nullopt;
+                const double fb = margin(xb);
+                const double slope = (fb - performance.frostMargin) / (xb - frosting); // frosting: margin < 0
+                return findRootFromWarmStart(margin, xb, fb, slope, lower, upper, 2.0 * kAcceptStep,
+                                             kControlTolerance, 40, kAcceptStep);
             };
             std::optional<double> root;
             if (memory && memory->m_frostRoot)

@@ -50,3 +50,42 @@ TEST(BracketedRoot, AcceptingAShortInterpolationStepSavesEvaluations)
                                         100, 1e-3);
     EXPECT_NEAR(step.x, 0.3, 1e-3);
 }
+
+using Airwright::Core::Recovery::findRootFromWarmStart;
+
+TEST(BracketedRoot, WarmStartFindsANearbyRoot)
+{
+    // Cube root of 2 from 1.3 with the tangent's slope, and from 1.0 with a slope
+    // a hundred times too small (the steps then overshoot): both land on it.
+    const auto f = [](double x) { return x * x * x - 2.0; };
+    const auto near = findRootFromWarmStart(f, 1.3, f(1.3), 3.0 * 1.3 * 1.3, 0.0, 3.0, 1e-12, 1e-13, 100, 0.0);
+    ASSERT_TRUE(near.has_value());
+    EXPECT_NEAR(*near, std::cbrt(2.0), 1e-12);
+    const auto rough = findRootFromWarmStart(f, 1.0, f(1.0), 0.03, 0.0, 3.0, 1e-12, 1e-13, 100, 0.0);
+    ASSERT_TRUE(rough.has_value());
+    EXPECT_NEAR(*rough, std::cbrt(2.0), 1e-12);
+}
+
+TEST(BracketedRoot, WarmStartGivesUpRatherThanLeaveItsRange)
+{
+    int evaluations = 0;
+    const auto f = [&](double x) {
+        ++evaluations;
+        return x - 2.0; // root at 2
+    };
+    // The root lies beyond the upper end: no bracket, nothing returned, every
+    // evaluation inside the range.
+    const auto r = findRootFromWarmStart(
+        [&](double x) {
+            EXPECT_LE(x, 1.5);
+            EXPECT_GE(x, 0.0);
+            return f(x);
+        },
+        0.5, f(0.5), 1.0, 0.0, 1.5, 1e-9, 1e-12, 100, 0.0);
+    EXPECT_FALSE(r.has_value());
+    EXPECT_LE(evaluations, 5);
+    // A vanishing slope gives nothing either (the caller solves on its full bracket).
+    EXPECT_FALSE(findRootFromWarmStart(f, 0.5, f(0.5), 0.0, 0.0, 3.0, 1e-9, 1e-12, 100, 0.0).has_value());
+    // A start on the root is the root.
+    EXPECT_EQ(findRootFromWarmStart(f, 2.0, 0.0, 1.0, 0.0, 3.0, 1e-9, 1e-12, 100, 0.0), 2.0);
+}

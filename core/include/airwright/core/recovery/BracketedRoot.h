@@ -6,6 +6,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <optional>
 
 namespace Airwright::Core::Recovery {
 
@@ -88,6 +89,39 @@ BracketedRoot findBracketedRoot(F&& f, double lo, double hi, double fLo, double 
     }
     out.x = b;
     return out;
+}
+
+// A root near a known point (a warm start, e.g. the last pass's control value):
+// from (x0, f0) and an estimated slope, secant steps each aimed a little past the
+// secant root (by 1e-3 of the step, at least minOvershoot), so that the root is
+// soon bracketed, then findBracketedRoot on that bracket. Never leaves
+// [lower, upper]. Empty when `steps` steps bracket nothing or the slope vanishes:
+// the caller then solves on its full bracket.
+template <class F>
+std::optional<double> findRootFromWarmStart(F&& f, double x0, double f0, double slope, double lower, double upper,
+                                            double minOvershoot, double xTolerance, int maxEvaluations,
+                                            double acceptStepBelow, int steps = 4)
+{
+    for (int step = 0; step < steps; ++step) {
+        if (f0 == 0.0)
+            return x0;
+        if (!(slope != 0.0 && std::isfinite(slope)))
+            return std::nullopt;
+        const double secant = x0 - f0 / slope;
+        const double past = std::max(1e-3 * std::abs(secant - x0), minOvershoot);
+        const double x1 = std::clamp(secant + (secant > x0 ? past : -past), lower, upper);
+        if (x1 == x0)
+            return std::nullopt;
+        const double f1 = f(x1);
+        if (f1 == 0.0)
+            return x1;
+        if ((f1 > 0.0) != (f0 > 0.0))
+            return findBracketedRoot(f, x0, x1, f0, f1, xTolerance, maxEvaluations, acceptStepBelow).x;
+        slope = (f1 - f0) / (x1 - x0);
+        x0 = x1;
+        f0 = f1;
+    }
+    return std::nullopt;
 }
 
 template <class F>
