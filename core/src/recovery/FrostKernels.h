@@ -5,6 +5,7 @@
 #include "EffectivenessKernels.h"
 
 #include "airwright/core/psychro/PsychroRaw.h"
+#include "airwright/core/recovery/BracketedRoot.h"
 #include "airwright/core/recovery/EffectivenessNtu.h"
 
 #include <algorithm>
@@ -60,9 +61,10 @@ inline bool surfaceFrosts(double tSurface, double warmVapourPressure)
 }
 
 // Largest W_line(t) - Ws(t) on the part of the line from (tCold, wCold) to
-// (tWarm, wWarmEffective) that lies below 0 C; the curve is convex and the line
-// straight, so the difference is concave and a golden-section search finds its
-// maximum. Positive: the line crosses into the supersaturated region.
+// (tWarm, wWarmEffective) that lies below 0 C. Ws is convex in t and the line
+// straight, so the difference is concave: its largest value is where its slope,
+// slope_line - dWs/dt, changes sign (a bracketed root, to 1e-6 K), or at an end
+// of the range. Positive: the line crosses into the supersaturated region.
 inline double mixingLineSupersaturation(double tCold, double wCold, double tWarm, double wWarmEffective, double p)
 {
     namespace raw = Psychro::detail;
@@ -70,27 +72,20 @@ inline double mixingLineSupersaturation(double tCold, double wCold, double tWarm
     if (!(upper > tCold) || !(tWarm > tCold))
         return wCold - raw::satHumidityRatio(tCold, p);
     const double slope = (wWarmEffective - wCold) / (tWarm - tCold);
-    auto d = [&](double t) { return wCold + slope * (t - tCold) - raw::satHumidityRatio(t, p); };
-    constexpr double invPhi = 0.6180339887498949;
-    double a = tCold, b = upper;
-    double x1 = b - invPhi * (b - a), x2 = a + invPhi * (b - a);
-    double f1 = d(x1), f2 = d(x2);
-    while (b - a > 1e-3) {
-        if (f1 < f2) {
-            a = x1;
-            x1 = x2;
-            f1 = f2;
-            x2 = a + invPhi * (b - a);
-            f2 = d(x2);
-        } else {
-            b = x2;
-            x2 = x1;
-            f2 = f1;
-            x1 = b - invPhi * (b - a);
-            f1 = d(x1);
-        }
-    }
-    return std::max({f1, f2, d(tCold), d(upper)});
+    auto difference = [&](double t) { return wCold + slope * (t - tCold) - raw::satHumidityRatio(t, p); };
+    // dWs/dt = 0.621945 p dpws/dt / (p - pws)^2 (ASHRAE Fundamentals 2017 ch. 1, eq. 23 differentiated).
+    auto differenceSlope = [&](double t) {
+        const double pws = raw::satPressure(t);
+        const double gap = p - pws;
+        return slope - raw::kMolarMassRatio * p * pws * raw::dLnSatPressure(t) / (gap * gap);
+    };
+    const double slopeAtCold = differenceSlope(tCold);
+    if (!(slopeAtCold > 0.0))
+        return difference(tCold);
+    const double slopeAtUpper = differenceSlope(upper);
+    if (!(slopeAtUpper < 0.0))
+        return difference(upper);
+    return difference(findBracketedRoot(differenceSlope, tCold, upper, slopeAtCold, slopeAtUpper, 1e-6, 100, 1e-6).x);
 }
 
 } // namespace Airwright::Core::Recovery::Kernels

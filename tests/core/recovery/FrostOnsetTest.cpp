@@ -1,5 +1,6 @@
 #include "airwright/core/InputError.h"
 #include "airwright/core/psychro/MoistAirState.h"
+#include "airwright/core/psychro/Psychrometrics.h"
 #include "airwright/core/recovery/EffectivenessNtu.h"
 #include "airwright/core/recovery/FrostOnset.h"
 
@@ -175,6 +176,45 @@ TEST(FrostOnset, MixingLineCriterion)
     EXPECT_FALSE(mixingLineFrosts(air(-5.0, 90.0), air(22.0, 30.0), fraction(0.0)));
     // Vapour taken up by a hygroscopic matrix moves the line below the curve.
     EXPECT_FALSE(mixingLineFrosts(air(-20.0, 90.0), air(22.0, 30.0), fraction(0.7)));
+}
+
+TEST(FrostOnset, MixingLineCriterionFindsAnInteriorTouch)
+{
+    // The line can touch the saturation curve first between its ends (here near
+    // -14 C, from -20 C outdoor air to 22 C / 30 % extract air). Where it starts to
+    // cross is found here by a plain scan of W_line(t) - Ws(t) every 1e-3 K below
+    // 0 C (the model against the psychrometric functions, our check): the
+    // criterion must agree on both sides of that outdoor humidity.
+    const Pressure p = kP;
+    const MoistAirState warm = air(22.0, 30.0);
+    const double tCold = -20.0;
+    auto scanMax = [&](double coldRh, double* where) {
+        const MoistAirState cold = air(tCold, coldRh);
+        const double wc = toKilogramsPerKilogram(cold.humidityRatio());
+        const double slope = (toKilogramsPerKilogram(warm.humidityRatio()) - wc) / (22.0 - tCold);
+        double best = -1.0;
+        for (double t = tCold; t <= 0.0; t += 1e-3) {
+            const double d = wc + slope * (t - tCold)
+                             - toKilogramsPerKilogram(Psychro::saturationHumidityRatio(celsius(t), p));
+            if (d > best) {
+                best = d;
+                *where = t;
+            }
+        }
+        return best;
+    };
+    double lo = 1.0, hi = 99.0, where = 0.0;
+    ASSERT_LT(scanMax(lo, &where), 0.0);
+    ASSERT_GT(scanMax(hi, &where), 0.0);
+    for (int i = 0; i < 40; ++i) {
+        const double mid = 0.5 * (lo + hi);
+        (scanMax(mid, &where) > 0.0 ? hi : lo) = mid;
+    }
+    scanMax(hi, &where);
+    ASSERT_GT(where, tCold + 1.0) << "the touch is inside the line, not at its cold end";
+    ASSERT_LT(where, -1.0);
+    EXPECT_FALSE(mixingLineFrosts(air(tCold, lo - 0.05), warm, fraction(0.0))) << "touch at " << where << " C";
+    EXPECT_TRUE(mixingLineFrosts(air(tCold, hi + 0.05), warm, fraction(0.0))) << "touch at " << where << " C";
 }
 
 TEST(FrostOnset, SurfaceCriterionNeedsBothFreezingAndDewPoint)
