@@ -10,6 +10,7 @@
 #include <cmath>
 #include <iterator>
 #include <limits>
+#include <type_traits>
 #include <utility>
 
 namespace Airwright::Core::Chain {
@@ -102,16 +103,45 @@ bool sameStream(const Sections::AirStream& a, const Sections::AirStream& b)
     return a.state == b.state && a.dryAir.value() == b.dryAir.value();
 }
 
+// emplace_back(inPlace(make)) constructs the element from make()'s return value
+// directly (a conversion that returns a prvalue is not a move), for aggregates
+// that emplace_back cannot build from their members.
+template <class Make>
+struct InPlace {
+    Make make;
+    operator std::invoke_result_t<Make&>() { return make(); }
+};
+template <class Make>
+InPlace<Make> inPlace(Make make)
+{
+    return InPlace<Make>{std::move(make)};
+}
+
 // Fills the result appended to `list` in place (a result is a few hundred bytes:
 // built where it stays rather than moved there).
 void appendResult(std::vector<SectionResult>& list, const Section& section, PathKind path,
                   const Sections::AirStream& inlet, const Sections::AirStream& outlet, Pressure pIn, Pressure dp,
                   Velocity faceVelocity, MassFlow added, MassFlow removed, SectionDetail&& detail)
 {
-    // Every member in order (SectionResult.h), so nothing is first defaulted.
-    list.emplace_back(section.id, std::string(sectionTypeKey(section.spec)), path, inlet, outlet, pIn, pIn - dp,
-                      volumeFlowOf(inlet), faceVelocity, dp, enthalpyFlowChange(inlet, outlet), added, removed,
-                      sectionLength(section.spec), std::move(detail));
+    // Every member at once, so nothing is first defaulted and then assigned, and
+    // built in the vector's own storage (InPlace).
+    list.emplace_back(inPlace([&] {
+        return SectionResult{.id = section.id,
+                             .typeKey = sectionTypeKey(section.spec),
+                             .path = path,
+                             .inlet = inlet,
+                             .outlet = outlet,
+                             .staticPressureIn = pIn,
+                             .staticPressureOut = pIn - dp,
+                             .inletFlow = volumeFlowOf(inlet),
+                             .faceVelocity = faceVelocity,
+                             .pressureDrop = dp,
+                             .duty = enthalpyFlowChange(inlet, outlet),
+                             .waterAdded = added,
+                             .waterRemoved = removed,
+                             .length = sectionLength(section.spec),
+                             .detail = std::move(detail)};
+    }));
 }
 
 } // namespace

@@ -21,9 +21,9 @@ using SectionDetail = std::variant<std::monostate, Sections::Damper::Detail, Sec
                                    Sections::MixingBox::Detail, Recovery::HeatRecoveryDetail>;
 
 // One section on one path in one case. A coupled section has one result per path
-// under the same id, each with its own states and flows. The chain builds it by
-// aggregate initialisation in member order (appendResult in CaseSolver.cpp): a
-// member added or moved here is added or moved there too.
+// under the same id, each with its own states and flows. The chain builds it
+// with designated initialisers (appendResult in CaseSolver.cpp): a member added
+// here is added there too.
 struct SectionResult {
     std::string id;
     std::string typeKey;
